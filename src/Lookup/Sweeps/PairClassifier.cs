@@ -31,7 +31,7 @@ internal sealed class PairClassifier
             distance,
             DHashBits.Distance(a.DHash, b.DHash),
             DHashBits.Distance(a.DHash, DHashBits.Mirror(b.DHash)),
-            float.NaN,
+            null,
             AlignmentHypothesis.FullFrame,
             CopyEdits.None);
 
