@@ -11,7 +11,7 @@ internal sealed partial class ChangePlanner
         CancellationToken cancellationToken)
     {
         private readonly List<PlannedChange> _items = [];
-        private readonly List<(MappedEntry Photo, string Sha256)> _arrivals = [];
+        private readonly List<MappedEntry> _arrivals = [];
         private int _hashed;
 
         public ChangePlan Plan(IReadOnlyList<MappedEntry> current)
@@ -19,14 +19,16 @@ internal sealed partial class ChangePlanner
             var present = new HashSet<string>(StringComparer.Ordinal);
             foreach (var photo in current)
             {
-                cancellationToken.ThrowIfCancellationRequested();
                 if (!present.Add(photo.Entry.RelativePath))
                 {
                     throw new ArgumentException(
                         $"the scan lists {photo.Entry.RelativePath} twice; each current photo needs a unique relative path.",
                         nameof(current));
                 }
+            }
 
+            foreach (var photo in current)
+            {
                 PlanPresent(photo);
             }
 
@@ -34,7 +36,7 @@ internal sealed partial class ChangePlanner
                 .Where(k => !present.Contains(k.RelativePath))
                 .OrderBy(k => k.RelativePath, StringComparer.Ordinal)
                 .ToList();
-            PlanMovesAndDepartures(departed);
+            PlanArrivalsAndDepartures(departed);
             _items.Sort((a, b) => string.CompareOrdinal(a.RelativePath, b.RelativePath));
             return new ChangePlan(_items, _hashed);
         }
@@ -42,30 +44,22 @@ internal sealed partial class ChangePlanner
         private void PlanPresent(MappedEntry photo)
         {
             var path = photo.Entry.RelativePath;
-            known.TryGetValue(path, out var record);
-            if (record is not null && record.Size == photo.Entry.Size && record.MtimeUtcTicks == photo.Entry.MtimeUtcTicks)
+            if (!known.TryGetValue(path, out var record))
+            {
+                _arrivals.Add(photo);
+                return;
+            }
+
+            if (record.Size == photo.Entry.Size && record.MtimeUtcTicks == photo.Entry.MtimeUtcTicks)
             {
                 _items.Add(SameContent(record, photo, record.Sha256));
                 return;
             }
 
             var (sha, error) = Hash(photo.Entry.FullPath);
-            if (sha is null)
-            {
-                _items.Add(new PlannedChange(ChangeKind.HashFailed, path, record, photo, null, error));
-            }
-            else if (record is null)
-            {
-                _arrivals.Add((photo, sha));
-            }
-            else if (string.Equals(sha, record.Sha256, StringComparison.OrdinalIgnoreCase))
-            {
-                _items.Add(SameContent(record, photo, sha));
-            }
-            else
-            {
-                _items.Add(new PlannedChange(ChangeKind.Changed, path, record, photo, sha));
-            }
+            _items.Add(sha is null ? new PlannedChange(ChangeKind.HashFailed, path, record, photo, null, error)
+                : string.Equals(sha, record.Sha256, StringComparison.OrdinalIgnoreCase) ? SameContent(record, photo, sha)
+                : new PlannedChange(ChangeKind.Changed, path, record, photo, sha));
         }
 
         private static PlannedChange SameContent(KnownPhoto record, MappedEntry photo, string? sha)
@@ -76,9 +70,11 @@ internal sealed partial class ChangePlanner
                 : item;
         }
 
-        private void PlanMovesAndDepartures(List<KnownPhoto> departed)
+        private void PlanArrivalsAndDepartures(List<KnownPhoto> departed)
         {
+            // Move sources: departed photos with a known hash, queued per hash in path order.
             var sources = new Dictionary<string, Queue<KnownPhoto>>(StringComparer.OrdinalIgnoreCase);
+            var sourceSizes = new HashSet<long>();
             foreach (var record in departed)
             {
                 if (IsUnreadable(record.RelativePath))
@@ -88,6 +84,7 @@ internal sealed partial class ChangePlanner
                 else if (record.Sha256 is { } sha)
                 {
                     (sources.TryGetValue(sha, out var queue) ? queue : sources[sha] = new Queue<KnownPhoto>()).Enqueue(record);
+                    sourceSizes.Add(record.Size);
                 }
                 else
                 {
@@ -95,14 +92,31 @@ internal sealed partial class ChangePlanner
                 }
             }
 
-            foreach (var (photo, sha) in _arrivals.OrderBy(a => a.Photo.Entry.RelativePath, StringComparer.Ordinal))
+            foreach (var photo in _arrivals.OrderBy(a => a.Entry.RelativePath, StringComparer.Ordinal))
             {
-                var moved = sources.TryGetValue(sha, out var queue) && queue.TryDequeue(out var source) ? source : null;
-                _items.Add(new PlannedChange(moved is null ? ChangeKind.New : ChangeKind.Moved,
-                    photo.Entry.RelativePath, moved, photo, sha));
+                _items.Add(PlanArrival(photo, sources, sourceSizes));
             }
 
             _items.AddRange(sources.Values.SelectMany(q => q).Select(Departure));
+        }
+
+        private PlannedChange PlanArrival(MappedEntry photo, Dictionary<string, Queue<KnownPhoto>> sources, HashSet<long> sourceSizes)
+        {
+            var path = photo.Entry.RelativePath;
+            // Identical content has identical length, so only a file as long as some departed photo can be a move.
+            if (!options.HashEveryNewFile && !sourceSizes.Contains(photo.Entry.Size))
+            {
+                return new PlannedChange(ChangeKind.New, path, null, photo, null);
+            }
+
+            var (sha, error) = Hash(photo.Entry.FullPath);
+            if (sha is null)
+            {
+                return new PlannedChange(ChangeKind.HashFailed, path, null, photo, null, error);
+            }
+
+            var source = sources.TryGetValue(sha, out var queue) && queue.TryDequeue(out var first) ? first : null;
+            return new PlannedChange(source is null ? ChangeKind.New : ChangeKind.Moved, path, source, photo, sha);
         }
 
         private PlannedChange Departure(KnownPhoto record) =>
@@ -114,6 +128,7 @@ internal sealed partial class ChangePlanner
 
         private (string? Sha, string? Error) Hash(string fullPath)
         {
+            cancellationToken.ThrowIfCancellationRequested();
             _hashed++;
             try
             {

@@ -7,13 +7,15 @@ namespace Lookup.Catalogue;
 /// <remarks>
 /// Rules, in order:
 /// 1. A current path that is known with the same size and modification time is unchanged; it is not hashed.
-/// 2. Any other current path is hashed once (new paths, and known paths whose size or time differ). A known path
-///    whose hash is unchanged is touched; a different hash is changed.
+/// 2. A known path whose size or time differ is hashed once: an equal hash makes it touched, a different one
+///    changed. A new path is hashed only when it could be a move (its length equals a departed photo's) or when
+///    <see cref="ChangePlanOptions.HashEveryNewFile"/> is set; otherwise its item carries no hash and the ingest
+///    computes it while reading the file.
 /// 3. Same content with a different SKU from the mapping is SKU-changed. An unmapped photo (null SKU) never
 ///    overwrites a known SKU.
 /// 4. A known path not present now is gone, unless it lies at or under a path the scan could not read
 ///    (unverified: kept as is).
-/// 5. A new path whose SHA-256 equals a gone path's is that photo moved: the record and its node travel, nothing is
+/// 5. A new path whose SHA-256 equals a departed path's is that photo moved: the record and its node travel, nothing is
 ///    embedded again. Only paths that are gone can be the source of a move, so a copy of a file that is still in
 ///    place is new (two photos, a duplicate to report), never a move. When several gone and new paths share one
 ///    hash they are paired in path order; extra new paths are new, extra gone paths are gone.

@@ -5,7 +5,8 @@ namespace Lookup.Catalogue;
 /// <param name="RelativePath">The current path; for gone, missing and unverified photos the known path.</param>
 /// <param name="Known">The index's record of this photo (for a move: the record at the old path), or null when new.</param>
 /// <param name="Current">The scanned file with its SKU, or null when the file is not there.</param>
-/// <param name="Sha256">The content hash: computed for hashed files, carried from the record otherwise (may be null).</param>
+/// <param name="Sha256">The content hash: computed for hashed files, carried from the record otherwise; null for a
+/// new file that could not be a move (the ingest hashes it) or a record that never had one.</param>
 /// <param name="Error">Why hashing failed, for <see cref="ChangeKind.HashFailed"/>.</param>
 internal sealed record PlannedChange(
     ChangeKind Kind,

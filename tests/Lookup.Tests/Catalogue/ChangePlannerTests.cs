@@ -77,7 +77,7 @@ public sealed class ChangePlannerTests : IDisposable
     }
 
     [Fact]
-    public void Plan_hashes_a_new_file_once_and_nothing_else()
+    public void Plan_leaves_a_new_file_unhashed_when_it_cannot_be_a_move()
     {
         var known = Remember();
         _tree.File("HS-2/d.png", SampleImages.Png(77));
@@ -85,9 +85,40 @@ public sealed class ChangePlannerTests : IDisposable
         var plan = Plan(known);
 
         var item = Item(plan, "HS-2/d.png");
-        Assert.Equal((ChangeKind.New, (KnownPhoto?)null, "HS-2"), (item.Kind, item.Known, item.Sku));
-        Assert.Equal([_tree.PathOf("HS-2/d.png")], _hashed);
+        Assert.Equal((ChangeKind.New, (KnownPhoto?)null, "HS-2", (string?)null), (item.Kind, item.Known, item.Sku, item.Sha256));
+        Assert.Empty(_hashed);
         Assert.Equal(3, plan.Count(ChangeKind.Unchanged));
+    }
+
+    [Fact]
+    public void Plan_hashes_every_new_file_once_when_asked()
+    {
+        var known = Remember();
+        var path = _tree.File("HS-2/d.png", SampleImages.Png(77));
+
+        var plan = new ChangePlanner(CountingHash).Plan(known, Current(), options: new ChangePlanOptions { HashEveryNewFile = true });
+
+        Assert.Equal(ContentHash.Sha256Hex(path), Item(plan, "HS-2/d.png").Sha256);
+        Assert.Equal([path], _hashed);
+    }
+
+    [Fact]
+    public void Plan_hashes_only_the_new_files_as_long_as_a_departed_photo()
+    {
+        var known = Remember();
+        var departed = File.ReadAllBytes(_tree.PathOf("HS-2/c.png"));
+        File.Delete(_tree.PathOf("HS-2/c.png"));
+        var sameLength = (byte[])departed.Clone();
+        sameLength[^5] ^= 0x01;
+        var candidate = _tree.File("HS-2/same-length.png", sameLength);
+        _tree.File("HS-2/other-length.png", [.. departed, 0]);
+
+        var plan = Plan(known);
+
+        Assert.Equal([candidate], _hashed);
+        Assert.Equal(ChangeKind.New, Item(plan, "HS-2/same-length.png").Kind);
+        Assert.Equal(ChangeKind.New, Item(plan, "HS-2/other-length.png").Kind);
+        Assert.Equal(ChangeKind.Gone, Item(plan, "HS-2/c.png").Kind);
     }
 
     [Fact]
@@ -168,7 +199,7 @@ public sealed class ChangePlannerTests : IDisposable
         var known = Remember();
         File.Copy(_tree.PathOf("BRK-1/a.jpg"), _tree.PathOf("HS-2/a-copy.jpg"));
 
-        var plan = Plan(known);
+        var plan = new ChangePlanner(CountingHash).Plan(known, Current(), options: new ChangePlanOptions { HashEveryNewFile = true });
 
         Assert.Equal(ChangeKind.New, Item(plan, "HS-2/a-copy.jpg").Kind);
         Assert.Equal(ChangeKind.Unchanged, Item(plan, "BRK-1/a.jpg").Kind);
@@ -254,7 +285,7 @@ public sealed class ChangePlannerTests : IDisposable
         _tree.File("BRK-1/new.jpg", SampleImages.Jpeg(66));
         var planner = new ChangePlanner(_ => throw new IOException("Input/output error"));
 
-        var plan = planner.Plan(known, Current());
+        var plan = planner.Plan(known, Current(), options: new ChangePlanOptions { HashEveryNewFile = true });
 
         var changed = Item(plan, "BRK-1/a.jpg");
         Assert.Equal((ChangeKind.HashFailed, known[0]), (changed.Kind, changed.Known));
