@@ -12,7 +12,8 @@ namespace Lookup.Catalogue;
 /// always listed under its own path, and a link back to an ancestor is reported, not walked.
 /// Hidden names (dot-prefixed, or carrying the Hidden attribute) are skipped below the root; the root itself is
 /// scanned even if hidden, because the caller named it. Zero-length files are never opened, which also keeps the
-/// scan away from pipes and device nodes (they report a length of zero). Not thread-safe; one scan per call.
+/// scan away from pipes and device nodes (they report a length of zero). An instance holds only its options, so
+/// concurrent scans are safe.
 /// </remarks>
 internal sealed partial class CatalogueScanner
 {
@@ -27,6 +28,7 @@ internal sealed partial class CatalogueScanner
 
     internal CatalogueScanner(ScanOptions options, ScanIo io)
     {
+        ArgumentOutOfRangeException.ThrowIfNegative(options.MaxDepth);
         _options = options;
         _io = io;
     }

@@ -43,7 +43,8 @@ internal sealed partial class CsvSkuMapping
             string path;
             try
             {
-                path = Path.GetFullPath(file, _folder);
+                // Tables are often written on Windows: a backslash is read as a folder separator everywhere.
+                path = Path.GetFullPath(file.Replace('\\', '/'), _folder);
             }
             catch (ArgumentException e)
             {

@@ -4,7 +4,8 @@ namespace Lookup.Catalogue;
 
 /// <summary>
 /// SKUs from a CSV table (RFC 4180) whose header names a <c>file</c> and a <c>sku</c> column (any order, any
-/// case; other columns are ignored). A file cell is a path relative to the CSV file's own folder, or absolute.
+/// case; other columns are ignored). A file cell is a path relative to the CSV file's own folder, or absolute;
+/// a backslash and a slash both separate folders.
 /// Several rows may give photos the same SKU. Cells are trimmed of surrounding spaces. SKUs compare ordinally.
 /// </summary>
 internal sealed partial class CsvSkuMapping : SkuMapping

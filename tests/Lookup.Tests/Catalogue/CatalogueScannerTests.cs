@@ -153,6 +153,12 @@ public sealed class CatalogueScannerTests : IDisposable
     }
 
     [Fact]
+    public void Scanner_refuses_a_negative_depth_limit()
+    {
+        Assert.Throws<ArgumentOutOfRangeException>(() => new CatalogueScanner(new ScanOptions { MaxDepth = -1 }));
+    }
+
+    [Fact]
     public void Scan_gives_the_same_result_twice()
     {
         _tree.File("b/2.jpg", SampleImages.Jpeg());

@@ -35,6 +35,15 @@ public sealed class CsvSkuMappingTests : IDisposable
     }
 
     [Fact]
+    public void Map_reads_backslashes_in_a_file_cell_as_folder_separators()
+    {
+        var result = Map("file,sku\r\nphotos\\BRK-1\\b.jpg,BRK-1\r\n");
+
+        Assert.Equal("BRK-1", result.Photos.Single(p => p.Entry.RelativePath == "BRK-1/b.jpg").Sku);
+        Assert.DoesNotContain(result.Problems, p => p.Kind == MappingProblemKind.RowFileMissing);
+    }
+
+    [Fact]
     public void Map_reports_every_kind_of_bad_row_with_its_line_in_line_order()
     {
         var result = Map(
