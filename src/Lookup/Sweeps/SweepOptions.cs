@@ -13,7 +13,8 @@ public sealed record SweepOptions
     public int SamePixelsMaxHashDistance { get; init; } = 2;
 
     /// <summary>Same pixels: at most this embedding distance. Equal pixels decode to equal tensors, so only float
-    /// rounding separates them (measured: 0 to 1e-6); a JPEG re-encode at quality 95 is already about 0.002 away.</summary>
+    /// rounding separates them; 0.001 leaves room for that and for a lossless re-save through another decoder (reasoned,
+    /// to be checked against the embedder's measured re-encode distances).</summary>
     public float SamePixelsMaxDistance { get; init; } = 0.001f;
 
     /// <summary>Copy: pairs farther apart than this are never copies. Project figures: re-encodes sit near 0.02,
@@ -29,9 +30,9 @@ public sealed record SweepOptions
     public float WholeFrameMinCorrelation { get; init; } = 0.97f;
 
     /// <summary>Copy, searched alignment (crop, small turn): the aligned thumbnails must correlate at least this well.
-    /// Measured on the reference photos: planted crops and turns score 0.955 or more, second views of one scene 0.84 at
-    /// most, unrelated photos 0.74 at most. Outlines on plain backgrounds align too well under a turn: different
-    /// Fashion-MNIST items of one class reach it in 2.3 % of pairs (see DEVELOPERS.md § Sweeps).</summary>
+    /// Measured on the reference photos: planted crops and turns score 0.96 or more, second views of one scene (stereo
+    /// and viewpoint pairs) 0.90 at most, unrelated photos 0.74 at most. Outlines on plain backgrounds align too well
+    /// under a turn: different Fashion-MNIST items of one class reach it in 2.7 % of pairs (see DEVELOPERS.md § Sweeps).</summary>
     public float AlignedMinCorrelation { get; init; } = 0.95f;
 
     /// <summary>Copy without thumbnails (dHash alone, same aspect ratio): at most this many differing bits. From

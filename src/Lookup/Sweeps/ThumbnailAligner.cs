@@ -2,7 +2,7 @@ namespace Lookup.Sweeps;
 
 /// <summary>
 /// Looks for the best placement of one photo's content inside another's frame (crop, resize, small turn, mirror)
-/// by correlating their 32 × 32 grey thumbnails: a coarse grid of crops at 16 × 16, then coordinate descent from the
+/// by correlating their 32 × 32 grey thumbnails: a coarse grid of crops at 16 × 16 (<see cref="CoarseGrid"/>), then coordinate descent from the
 /// best few, polished and scored at 32 × 32. The bigger photo (in pixels) is taken as the container, both ways round
 /// when the two are about the same size. Holds scratch buffers: one instance per thread.
 /// </summary>
@@ -10,7 +10,6 @@ internal sealed class ThumbnailAligner
 {
     private const int Fine = GreyThumbnail.Side;
     private const int Coarse = Fine / 2;
-    private const int CoarseSteps = 16;
     private const int Starts = 2;
 
     private readonly float[] _first = new float[GreyThumbnail.Length];
@@ -20,6 +19,7 @@ internal sealed class ThumbnailAligner
     private readonly float[] _mirrored = new float[GreyThumbnail.Length];
     private readonly float[] _template16 = new float[Coarse * Coarse];
     private readonly float[] _half = new float[Coarse * Coarse];
+    private readonly CoarseGrid _coarse = new();
     private readonly float[] _matched = new float[GreyThumbnail.Length];
     private readonly float[] _shrinkScratch = new float[GreyThumbnail.Length];
 
@@ -83,7 +83,7 @@ internal sealed class ThumbnailAligner
         }
 
         Span<(float Score, AlignmentHypothesis H)> starts = stackalloc (float, AlignmentHypothesis)[Starts + 1];
-        var count = CoarseGrid(space, starts[..Starts]);
+        var count = _coarse.Search(_first, _template16, space, starts[..Starts]);
         if (Math.Abs(Math.Log(container.Aspect / content.Aspect)) < 0.05)
         {
             var mirrored = AlignmentHypothesis.FullFrame with { Mirrored = true };
@@ -141,61 +141,6 @@ internal sealed class ThumbnailAligner
         return new SearchSpace(
             container.Width, container.Height, content.Aspect, limits.MinCropScale, noUpscale, limits.MaxAngleDegrees,
             limits.UpscaleSlack);
-    }
-
-    /// <summary>Unturned, unmirrored crops on a grid (scale steps of 0.1, centre steps of 1/16), best few kept.</summary>
-    private int CoarseGrid(in SearchSpace space, Span<(float Score, AlignmentHypothesis H)> best)
-    {
-        var count = 0;
-        for (var scale = 1f; scale >= space.MinScale - 1e-4f; scale = NextScale(scale, space.MinScale))
-        {
-            var (halfWidth, halfHeight) = space.HalfExtent(scale);
-            var columns = Math.Max(1, (int)((1 - (2 * halfWidth)) * CoarseSteps) + 1);
-            var rows = Math.Max(1, (int)((1 - (2 * halfHeight)) * CoarseSteps) + 1);
-            for (var r = 0; r < rows; r++)
-            {
-                for (var c = 0; c < columns; c++)
-                {
-                    var h = new AlignmentHypothesis(
-                        Between(halfWidth, c, columns), Between(halfHeight, r, rows), scale, 0f, false);
-                    var score = Score(space, _template16, Coarse, h);
-                    count = KeepBest(best, count, score, h);
-                }
-            }
-        }
-
-        return count;
-    }
-
-    private static float NextScale(float scale, float minScale) =>
-        scale > minScale && scale - 0.1f < minScale ? minScale : scale - 0.1f;
-
-    private static float Between(float half, int index, int count) =>
-        count == 1 ? 0.5f : half + ((1 - (2 * half)) * index / (count - 1));
-
-    private static int KeepBest(Span<(float Score, AlignmentHypothesis H)> best, int count, float score, in AlignmentHypothesis h)
-    {
-        if (count < best.Length)
-        {
-            best[count++] = (score, h);
-            return count;
-        }
-
-        var worst = 0;
-        for (var i = 1; i < count; i++)
-        {
-            if (best[i].Score < best[worst].Score)
-            {
-                worst = i;
-            }
-        }
-
-        if (score > best[worst].Score)
-        {
-            best[worst] = (score, h);
-        }
-
-        return count;
     }
 
     /// <summary>
