@@ -140,9 +140,10 @@ internal sealed class PairClassifier
             edits |= CopyEdits.Cropped;
         }
 
+        // A straightened photo is enlarged by the turn's own zoom; only a shrink beyond that counts as a resize then.
         var fitWidth = Math.Min(container.Width, content.AspectRatio * container.Height);
-        var regionWidth = h.Scale * fitWidth;
-        if (Math.Abs((content.Width / regionWidth) - 1) > 0.03)
+        var ratio = content.Width / (h.Scale * fitWidth);
+        if (ratio < 0.97 || (ratio > 1.03 && !edits.HasFlag(CopyEdits.Rotated)))
         {
             edits |= CopyEdits.Resized;
         }
