@@ -26,6 +26,16 @@ internal static class SweepInput
                     nameof(photos));
             }
 
+            // Cosine distance is 1 − dot only for unit vectors; a raw embedding would make every distance wrong.
+            var norm = System.Numerics.Tensors.TensorPrimitives.Norm(photo.Embedding.Span);
+            if (Math.Abs(norm - 1f) > 1e-3f)
+            {
+                throw new ArgumentException(
+                    $"Photo {photo.Path} has an embedding of length {norm:0.######}, not 1: the sweep needs L2-normalised " +
+                    "embeddings (normalise them when reading the index, or re-ingest the photo).",
+                    nameof(photos));
+            }
+
             if (string.IsNullOrEmpty(photo.Sku) || string.IsNullOrEmpty(photo.Sha256))
             {
                 throw new ArgumentException(

@@ -131,6 +131,18 @@ public sealed class SweepEngineTests
     }
 
     [Fact]
+    public void Run_rejects_an_embedding_that_is_not_unit_length_and_says_so()
+    {
+        var photos = SyntheticCatalogue.Build();
+        photos[2] = photos[2] with { Embedding = photos[2].Embedding.ToArray().Select(x => x * 2).ToArray() };
+
+        var error = Assert.Throws<ArgumentException>(() => SweepEngine.Run(photos, new ExactNeighbourSource(photos)));
+
+        Assert.Contains(photos[2].Path, error.Message, StringComparison.Ordinal);
+        Assert.Contains("L2-normalised", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Run_of_an_empty_catalogue_is_an_empty_report()
     {
         var report = SweepEngine.Run([], new ExactNeighbourSource([]));
