@@ -21,8 +21,10 @@ public sealed record SweepOptions
     /// crops up to 0.1, overlays and watermarks up to 0.2; 0.25 leaves a margin.</summary>
     public float CopyMaxDistance { get; init; } = 0.25f;
 
-    /// <summary>Crop search (the costly step) only for pairs within this distance. Project figures: crops up to 0.1.</summary>
-    public float CropMaxDistance { get; init; } = 0.12f;
+    /// <summary>Crop search (the costly step) only for pairs within this distance. Measured with the default ResNet18:
+    /// 80 % crops of the 12 reference photos lie 0.052–0.138 from their originals (project figures said up to 0.1);
+    /// 0.16 leaves a margin.</summary>
+    public float CropMaxDistance { get; init; } = 0.16f;
 
     /// <summary>Copy, whole frames (same aspect ratio; re-encode, resize, tone, mirror): the thumbnails must correlate
     /// at least this well. Measured on the reference photos: planted whole-frame copies score 0.988 or more; different
