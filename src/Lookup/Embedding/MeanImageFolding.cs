@@ -28,14 +28,18 @@ internal static class MeanImageFolding
         long[] shape = [1, 3, size, size];
 
         var atZero = Run(session, model, new float[length], shape);
+        // Values differ between planes at every pixel, so a wrong channel order cannot pass unnoticed.
+        var planeLength = size * size;
         var probe = new float[length];
-        for (var i = 0; i < length; i++)
+        for (var plane = 0; plane < 3; plane++)
         {
-            probe[i] = (i * 37) % 256;
+            for (var i = 0; i < planeLength; i++)
+            {
+                probe[(plane * planeLength) + i] = ((i * 37) + (plane * 85) + 1) % 256;
+            }
         }
 
         var atProbe = Run(session, model, probe, shape);
-        var planeLength = size * size;
         var worst = 0f;
         for (var plane = 0; plane < 3; plane++)
         {
