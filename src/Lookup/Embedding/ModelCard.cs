@@ -8,7 +8,9 @@ namespace Lookup.Embedding;
 /// Describes an ONNX image network well enough to embed photos with it: the file, the input and output names, the
 /// input size and how pixels are normalised. The default ResNet18 card is built in (<see cref="Default"/>); any
 /// other CNN whose output is a feature vector can be brought with a JSON card (<see cref="Load"/>).
-/// Paths in a card file are relative to the card; loaded cards hold absolute paths.
+/// Paths in a card file are relative to the card; loaded cards hold absolute paths. Record equality compares
+/// <see cref="Mean"/> and <see cref="Std"/> by reference: compare <see cref="ImageEmbedder.Fingerprint"/> values to
+/// decide whether two cards give comparable embeddings.
 /// </summary>
 public sealed record ModelCard
 {

@@ -20,7 +20,7 @@ namespace Lookup.Imaging;
 /// (pixel count) → decode under a deadline → EXIF orientation → RGB over white. Nothing is decoded until the header
 /// has passed the limits. Thread-safe: one instance serves every worker.
 /// </summary>
-public sealed partial class PhotoDecoder
+public sealed class PhotoDecoder
 {
     private readonly Configuration configuration;
 

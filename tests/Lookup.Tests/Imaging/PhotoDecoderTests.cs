@@ -37,6 +37,21 @@ public sealed class PhotoDecoderTests : IDisposable
     }
 
     [Fact]
+    public void Decode_keeps_only_the_first_frame_of_an_animated_gif()
+    {
+        // skimage/data/no_time_for_that_tiny.gif: 24 frames; ImageSharp's own full decode gives the reference frame.
+        var path = ReferenceData.SkImage("no_time_for_that_tiny.gif");
+        using var all = Image.Load<Rgb24>(path);
+        using var first = all.Frames.CloneFrame(0);
+
+        using var photo = decoder.Decode(path);
+
+        Assert.Equal(24, all.Frames.Count);
+        Assert.Equal(1, photo.Image.Frames.Count);
+        Assert.Equal(0, TestPhotos.MeanAbsoluteDifference(first, photo.Image));
+    }
+
+    [Fact]
     public void Decode_converts_a_cmyk_jpeg_to_the_colours_of_its_rgb_source()
     {
         // chelsea-cmyk.jpg was made from skimage chelsea.png by ImageMagick (-colorspace CMYK -quality 92).
