@@ -149,22 +149,35 @@ public sealed class PhotoDecoder
     private Image<Rgb24> DecodePixels(IImageDecoder decoder, ReadOnlyMemory<byte> content, string path, PhotoFormat format, IImageInfo header)
     {
         using var timeout = new CancellationTokenSource(Limits.DecodeTimeout);
+        var deadline = Deadline();
+        Image<Rgb24>? image = null;
         try
         {
-            using var stream = new DeadlineReadStream(content, Deadline());
+            using var stream = new DeadlineReadStream(content, deadline);
             if (format == PhotoFormat.Jpeg)
             {
                 // JPEG has no alpha: decode straight to RGB (grey, CMYK and YCCK are converted by the decoder).
-                return decoder.Decode<Rgb24>(configuration, stream, timeout.Token);
+                image = decoder.Decode<Rgb24>(configuration, stream, timeout.Token);
+            }
+            else
+            {
+                using var withAlpha = decoder.Decode<Rgba32>(configuration, stream, timeout.Token);
+                image = AlphaFlattening.OverWhite(withAlpha, configuration);
+                CopyOrientation(withAlpha, image);
             }
 
-            using var withAlpha = decoder.Decode<Rgba32>(configuration, stream, timeout.Token);
-            var flattened = AlphaFlattening.OverWhite(withAlpha, configuration);
-            CopyOrientation(withAlpha, flattened);
-            return flattened;
+            // WebP, BMP and uncompressed TIFF read their data in one go and cannot be interrupted; a decode that
+            // overran is still refused, so the outcome for a file does not depend on its format.
+            if (Stopwatch.GetTimestamp() > deadline)
+            {
+                throw new TimeoutException("The decode finished after its deadline.");
+            }
+
+            return image;
         }
         catch (Exception e)
         {
+            image?.Dispose();
             throw Translate(e, path, format, header.Width, header.Height);
         }
     }
