@@ -1,17 +1,19 @@
 namespace Lookup.Cli;
 
-/// <summary>Process exit codes shared by every command; documented in each command's help.</summary>
+/// <summary>
+/// Process exit codes, the same for every command (documented in README and in --help).
+/// </summary>
 internal static class ExitCodes
 {
-    /// <summary>The command did its job.</summary>
-    public const int Ok = 0;
+    /// <summary>Everything asked was done.</summary>
+    public const int Success = 0;
 
-    /// <summary>A photo could not be used (empty, not an image, truncated, over a limit, unreadable).</summary>
-    public const int PhotoRejected = 1;
+    /// <summary>The command ran but some inputs failed (photos recorded with reasons), or an error stopped it.</summary>
+    public const int Failures = 1;
 
-    /// <summary>The command line was wrong: unknown command or option, missing argument.</summary>
+    /// <summary>The command line was wrong: unknown option, missing argument, bad value.</summary>
     public const int Usage = 2;
 
-    /// <summary>The model card or ONNX model could not be loaded.</summary>
-    public const int ModelUnusable = 3;
+    /// <summary>A sweep found findings that were not in the previous sweep (of the kinds asked for).</summary>
+    public const int NewFindings = 3;
 }

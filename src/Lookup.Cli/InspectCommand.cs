@@ -26,7 +26,7 @@ internal static class InspectCommand
               lookup inspect photos/4471-B/front.jpg
               lookup inspect photos/4471-B/front.jpg --json
 
-            Exit codes: 0 ok, 1 photo rejected (reason on stderr), 2 usage error, 3 model could not be loaded.
+            Exit codes: 0 ok, 1 photo rejected or model not loadable (reason on stderr), 2 usage error.
             """)
         {
             photo,
@@ -52,7 +52,7 @@ internal static class InspectCommand
         catch (ModelLoadException e)
         {
             error.WriteLine($"lookup inspect: {e.Message}");
-            return ExitCodes.ModelUnusable;
+            return ExitCodes.Failures;
         }
 
         using (embedder)
@@ -71,7 +71,7 @@ internal static class InspectCommand
                     output.WriteLine(JsonSerializer.Serialize(new { photo = path, rejected = ReasonCode(e.Reason), message = e.Message }, Json));
                 }
 
-                return ExitCodes.PhotoRejected;
+                return ExitCodes.Failures;
             }
 
             var report = ToReport(path, result, embedder);
@@ -84,7 +84,7 @@ internal static class InspectCommand
                 WriteTable(report, embedder.InputSize, output);
             }
 
-            return ExitCodes.Ok;
+            return ExitCodes.Success;
         }
     }
 
