@@ -17,8 +17,10 @@ public sealed record SweepOptions
     /// to be checked against the embedder's measured re-encode distances).</summary>
     public float SamePixelsMaxDistance { get; init; } = 0.001f;
 
-    /// <summary>Copy: pairs farther apart than this are never copies. Project figures: re-encodes sit near 0.02,
-    /// crops up to 0.1, overlays and watermarks up to 0.2; 0.25 leaves a margin.</summary>
+    /// <summary>Copy: pairs farther apart than this are never copies. Project figures: overlays and watermarks up to
+    /// 0.2. Measured with the default ResNet18 on planted copies of the reference photos: re-encodes, resizes, tone
+    /// changes and mirrors 0.001–0.065 (0.142 for a half-size copy of a 324 × 223 photo), straightened 0.012–0.090,
+    /// 80 % crops 0.052–0.138. 0.25 leaves a margin.</summary>
     public float CopyMaxDistance { get; init; } = 0.25f;
 
     /// <summary>Crop search (the costly step) only for pairs within this distance. Measured with the default ResNet18:
