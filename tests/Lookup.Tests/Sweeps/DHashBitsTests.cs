@@ -1,4 +1,8 @@
+using Lookup.Imaging;
 using Lookup.Sweeps;
+using SixLabors.ImageSharp;
+using SixLabors.ImageSharp.PixelFormats;
+using SixLabors.ImageSharp.Processing;
 
 namespace Lookup.Tests.Sweeps;
 
@@ -15,6 +19,23 @@ public sealed class DHashBitsTests
             var mirrored = grid.Select(row => row.Reverse().ToArray()).ToArray();
             Assert.Equal(HashOf(mirrored), DHashBits.Mirror(HashOf(grid)));
         }
+    }
+
+    [Theory]
+    [InlineData("opencv/baboon.jpg")]
+    [InlineData("opencv/fruits.jpg")]
+    [InlineData("skimage/astronaut.png")]
+    [InlineData("skimage/coffee.png")]
+    public void Mirror_matches_the_imaging_dhash_of_the_mirrored_photo(string photo)
+    {
+        // Reference photos (tests/reference-data, see SOURCES.md) with texture everywhere, so neighbours rarely tie;
+        // a tie or a resampling difference may still flip a bit or two.
+        using var image = Image.Load<Rgb24>(ReferencePhotos.PathOf(photo));
+        using var mirrored = image.Clone(c => c.Flip(FlipMode.Horizontal));
+
+        var derived = DHashBits.Mirror(DifferenceHash.Compute(image));
+
+        Assert.InRange(DHashBits.Distance(derived, DifferenceHash.Compute(mirrored)), 0, 2);
     }
 
     [Fact]

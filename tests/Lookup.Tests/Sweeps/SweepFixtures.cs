@@ -1,4 +1,5 @@
 using System.Security.Cryptography;
+using Lookup.Imaging;
 using Lookup.Sweeps;
 using SixLabors.ImageSharp;
 using SixLabors.ImageSharp.PixelFormats;
@@ -85,28 +86,6 @@ internal static class SweepFixtures
         return GreyThumbnail.FromGrey(bytes, image.Width, image.Height);
     }
 
-    /// <summary>
-    /// dHash as N. Krawetz describes it ("Kind of Like That", 2013): 9 × 8 grey, one bit per row neighbour pair set
-    /// when the right pixel is brighter; row 0 in the top byte (the engine's Imaging layout).
-    /// </summary>
-    public static ulong DHash(Image<Rgb24> image)
-    {
-        using var small = image.Clone(c => c.Resize(9, 8, KnownResamplers.Box));
-        var hash = 0UL;
-        for (var y = 0; y < 8; y++)
-        {
-            for (var x = 0; x < 8; x++)
-            {
-                hash <<= 1;
-                if (Luma(small[x + 1, y]) > Luma(small[x, y]))
-                {
-                    hash |= 1;
-                }
-            }
-        }
-
-        return hash;
-    }
-
-    private static float Luma(Rgb24 p) => (0.299f * p.R) + (0.587f * p.G) + (0.114f * p.B);
+    /// <summary>The engine's dHash (Imaging), so tests see the bit layout the index will hold.</summary>
+    public static ulong DHash(Image<Rgb24> image) => DifferenceHash.Compute(image);
 }
