@@ -1,0 +1,29 @@
+using System.Runtime.CompilerServices;
+
+namespace Lookup.Graph;
+
+/// <summary>The in-memory storage seen through <see cref="IGraphView"/>: spans over the arrays of one <see cref="GraphState"/>.</summary>
+internal readonly struct ArrayGraphView(GraphState state) : IGraphView
+{
+    public int NodeLimit => state.Capacity;
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ReadOnlySpan<float> Vector(int id) => state.Vectors.AsSpan(id * state.Dimension, state.Dimension);
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public ReadOnlySpan<int> Links(int id, int level)
+    {
+        var row = state.Row(id, level);
+        if (row.IsEmpty)
+        {
+            return default;
+        }
+
+        // The writer stores ids before the count, so a concurrent reader sees valid ids; clamp a torn count.
+        int count = Math.Clamp(Volatile.Read(ref row[0]), 0, row.Length - 1);
+        return row.Slice(1, count);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public bool IsDeleted(int id) => state.Deleted[id];
+}
