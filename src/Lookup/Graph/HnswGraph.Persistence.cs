@@ -20,6 +20,15 @@ public sealed partial class HnswGraph
         return ids;
     }
 
+    /// <summary>Records <paramref name="ids"/> as changed again (a commit that failed).</summary>
+    internal void Remark(IEnumerable<int> ids)
+    {
+        foreach (int id in ids)
+        {
+            MarkDirty(id);
+        }
+    }
+
     /// <summary>
     /// A graph over arrays filled by a loader. The level generator is reseeded from the seed and the node count,
     /// so a reopened graph keeps drawing reproducible levels.
