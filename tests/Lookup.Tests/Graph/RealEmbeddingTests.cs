@@ -1,5 +1,6 @@
 using Lookup.Graph;
 using Lookup.Tests.ReferenceData;
+using Xunit.Abstractions;
 
 namespace Lookup.Tests.Graph;
 
