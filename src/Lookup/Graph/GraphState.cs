@@ -71,7 +71,13 @@ internal sealed class GraphState
         Array.Copy(Vectors, grown.Vectors, (long)used * Dimension);
         Array.Copy(Links0, grown.Links0, (long)used * Stride0);
         Array.Copy(Levels, grown.Levels, used);
-        Array.Copy(Upper, grown.Upper, used);
+        // Upper rows are copied, not shared: the writer keeps editing the new state's rows, and a reader still on
+        // this state must never meet an id beyond this state's capacity.
+        for (int id = 0; id < used; id++)
+        {
+            grown.Upper[id] = (int[]?)Upper[id]?.Clone();
+        }
+
         Array.Copy(Deleted, grown.Deleted, used);
         Array.Copy(InDegree0, grown.InDegree0, used);
         return grown;

@@ -114,6 +114,11 @@ public sealed partial class IndexFile : IDisposable
     public bool TryCheckpoint()
     {
         RequireWritable();
+        return CheckpointIfNoReaders();
+    }
+
+    private bool CheckpointIfNoReaders()
+    {
         using var exclusive = ReaderRegistry.TryExclusive(Path);
         if (exclusive is null)
         {
@@ -139,16 +144,16 @@ public sealed partial class IndexFile : IDisposable
             return;
         }
 
-        _disposed = true;
         try
         {
             if (IsWritable)
             {
-                TryCheckpoint();
+                CheckpointIfNoReaders();
             }
         }
         finally
         {
+            _disposed = true;
             Database.Dispose();
             _dataStream?.Dispose();
             _logStream?.Dispose();

@@ -150,7 +150,17 @@ public sealed class HnswGraphTests
             var random = new Random(r);
             while (!stop.IsCancellationRequested)
             {
-                var hits = graph.Search(vectors[random.Next(vectors.Length)], 10);
+                Neighbour[] hits;
+                try
+                {
+                    hits = graph.Search(vectors[random.Next(vectors.Length)], 10);
+                }
+                catch (Exception error) when (error is IndexOutOfRangeException or ArgumentException or InvalidOperationException)
+                {
+                    failures.Enqueue(error.ToString());
+                    return;
+                }
+
                 int count = graph.Count;
                 for (int i = 0; i < hits.Length; i++)
                 {
@@ -174,6 +184,7 @@ public sealed class HnswGraphTests
         stop.Cancel();
         await Task.WhenAll(readers);
         Assert.Empty(failures);
-        Assert.True(graph.CheckIntegrity().IsHealthy);
+        var report = graph.CheckIntegrity();
+        Assert.True(report.IsHealthy, report.ToString());
     }
 }
