@@ -155,8 +155,12 @@ internal static class GraphBench
             ["datasets"] = datasets,
             ["exact_crossover_n"] = crossover.CrossoverCount,
             ["persisted_n"] = persisted.Count,
+            ["persisted_save_s"] = Math.Round(persisted.SaveSeconds, 1),
             ["persisted_open_ms"] = Math.Round(persisted.OpenMilliseconds, 1),
             ["persisted_cold_query_ms"] = Math.Round(persisted.ColdQueryMilliseconds, 1),
+            ["persisted_warm_qps"] = Math.Round(persisted.WarmQps),
+            ["persisted_load_all_s"] = Math.Round(persisted.LoadAllSeconds, 1),
+            ["persisted_identical"] = persisted.Identical,
         }, new JsonSerializerOptions { NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.AllowNamedFloatingPointLiterals });
     }
 

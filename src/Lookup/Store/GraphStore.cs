@@ -59,6 +59,46 @@ public sealed class GraphStore
         return graph;
     }
 
+    /// <summary>
+    /// Writes a graph built in memory (a bulk build) into a writable file that has no graph yet, in transactions of
+    /// <paramref name="nodesPerTransaction"/> nodes with the metadata last: a crash part-way leaves a file with no
+    /// graph, never half of one. Afterwards <see cref="Commit"/> saves further changes to the same graph.
+    /// </summary>
+    public void Save(HnswGraph graph, string modelFingerprint, int nodesPerTransaction = 10_000)
+    {
+        ArgumentNullException.ThrowIfNull(graph);
+        ArgumentException.ThrowIfNullOrWhiteSpace(modelFingerprint);
+        ArgumentOutOfRangeException.ThrowIfNegativeOrZero(nodesPerTransaction);
+        _file.RequireWritable();
+        if (HasGraph)
+        {
+            throw new InvalidOperationException($"{_file.Path} already holds a graph; Save is for a file without one.");
+        }
+
+        graph.TrackChanges();
+        graph.TakeChanged();
+        var state = graph.State;
+        var vectors = _file.Database.GetCollection(NodeCodec.VectorCollection);
+        var links = _file.Database.GetCollection(NodeCodec.LinkCollection);
+        for (int start = 0; start < graph.Count; start += nodesPerTransaction)
+        {
+            int end = Math.Min(start + nodesPerTransaction, graph.Count);
+            _file.InTransaction(() =>
+            {
+                for (int id = start; id < end; id++)
+                {
+                    vectors.Upsert(NodeCodec.VectorDocument(id, state.Vectors.AsSpan(id * graph.Dimension, graph.Dimension)));
+                    links.Upsert(NodeCodec.LinkDocument(state, id));
+                }
+            });
+        }
+
+        _graph = graph;
+        _fingerprint = modelFingerprint;
+        _file.InTransaction(() => WriteMeta(graph));
+        _savedCount = graph.Count;
+    }
+
     /// <summary>Loads the whole graph into memory (writer: for further inserts; reader: for bulk work).</summary>
     /// <param name="expectedModelFingerprint">When given, a graph built with another model is refused.</param>
     public HnswGraph Load(string? expectedModelFingerprint = null)

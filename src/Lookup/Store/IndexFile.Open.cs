@@ -35,15 +35,16 @@ public sealed partial class IndexFile
 
             database = Wrap(path, () => OpenEngine(path, null, null, readOnly: false));
             var file = new IndexFile(path, IndexAccess.Write, database, writerLock, null, null, null);
-            if (isNew)
+            database.CheckpointSize = 0;
+
+            // A writer killed between creating the file and its first commit leaves an empty LiteDB file: adopt it.
+            if (isNew || !database.GetCollectionNames().Any())
             {
-                database.CheckpointSize = 0;
                 file.WriteSchema();
             }
             else
             {
                 file.ReadSchema();
-                database.CheckpointSize = 0;
             }
 
             file.TryCheckpoint();
