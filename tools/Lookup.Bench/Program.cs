@@ -18,6 +18,7 @@ internal static class Program
             "graph" => GraphBench.Run(quick),
             "extract-fashion-mnist" => ExtractFashionMnist.Run(args),
             "prepare" => Prepare(),
+            "kernel" => KernelBench.Run(),
             "crash-test" => CrashTest.Run(args),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
             _ => Usage(),

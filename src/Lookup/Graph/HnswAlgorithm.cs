@@ -75,8 +75,20 @@ internal static class HnswAlgorithm
                 break;
             }
 
-            foreach (int e in graph.Links(c.Id, level))
+            var links = graph.Links(c.Id, level);
+            if (links.Length > 0)
             {
+                graph.Prefetch(links[0]);
+            }
+
+            for (int i = 0; i < links.Length; i++)
+            {
+                int e = links[i];
+                if (i + 1 < links.Length)
+                {
+                    graph.Prefetch(links[i + 1]);
+                }
+
                 if (!visited.TryVisit(e))
                 {
                     continue;

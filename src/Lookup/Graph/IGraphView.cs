@@ -18,4 +18,7 @@ internal interface IGraphView
 
     /// <summary>True when <paramref name="id"/> is a tombstone: walked through, never returned.</summary>
     bool IsDeleted(int id);
+
+    /// <summary>Hints that <paramref name="id"/>'s vector is about to be read (a cache prefetch; may do nothing).</summary>
+    void Prefetch(int id);
 }

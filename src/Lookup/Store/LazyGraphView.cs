@@ -19,4 +19,8 @@ internal readonly struct LazyGraphView(PersistedGraph graph) : IGraphView
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public bool IsDeleted(int id) => graph.IsDeletedUnchecked(id);
+
+    public void Prefetch(int id)
+    {
+    }
 }
