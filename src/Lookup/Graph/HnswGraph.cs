@@ -89,7 +89,8 @@ public sealed partial class HnswGraph : INearestIndex
     }
 
     /// <inheritdoc />
-    /// <remarks>Below <see cref="HnswParameters.ExactBelow"/> live nodes this scans every vector (exact).</remarks>
+    /// <remarks>Below <see cref="HnswParameters.ExactBelow"/> live nodes this scans every vector (exact).
+    /// Thread safety: any thread, concurrently with other searches and with the writer.</remarks>
     public Neighbour[] Search(ReadOnlySpan<float> query, int k, int? ef = null)
     {
         GraphGuard.Query(query.Length, Dimension, k);
@@ -108,7 +109,8 @@ public sealed partial class HnswGraph : INearestIndex
 
     /// <inheritdoc />
     /// <remarks>An expanding-ef graph search (see <see cref="HnswAlgorithm.RangeSearch{TView}"/> for its recall
-    /// trade-off); exact below <see cref="HnswParameters.ExactBelow"/> live nodes.</remarks>
+    /// trade-off); exact below <see cref="HnswParameters.ExactBelow"/> live nodes.
+    /// Thread safety: any thread, concurrently with other searches and with the writer.</remarks>
     public Neighbour[] RangeSearch(ReadOnlySpan<float> query, float radius)
     {
         GraphGuard.Query(query.Length, Dimension, 1);

@@ -22,7 +22,7 @@ public sealed record HnswParameters(
     int ExactBelow = HnswParameters.DefaultExactBelow)
 {
     /// <summary>Live-node count up to which a brute-force scan is used (measured crossover, see DEVELOPERS.md).</summary>
-    public const int DefaultExactBelow = 2_000;
+    public const int DefaultExactBelow = 500;
 
     /// <summary>Maximum links per node on layer 0 (the paper's M_max0 = 2·M).</summary>
     public int MaxM0 => 2 * M;
