@@ -1,0 +1,171 @@
+using System.Text;
+using LiteDB;
+
+namespace Lookup.Store;
+
+/// <summary>Opening, creating and validating index files.</summary>
+public sealed partial class IndexFile
+{
+    // LiteDB 5 writes this text at offset 32 of the first page of every data file.
+    private static readonly byte[] LiteDbMagic = Encoding.ASCII.GetBytes("** This is a LiteDB file **");
+
+    /// <summary>
+    /// Opens <paramref name="path"/>. <see cref="IndexAccess.Write"/> creates the file when missing and takes the
+    /// writer lock; <see cref="IndexAccess.Read"/> opens a read-only snapshot and may run beside the writer.
+    /// </summary>
+    /// <exception cref="IndexFileException">Missing (read), not an index, damaged, newer schema, or another writer active.</exception>
+    public static IndexFile Open(string path, IndexAccess access, TimeSpan? readerWait = null)
+    {
+        ArgumentException.ThrowIfNullOrWhiteSpace(path);
+        string full = System.IO.Path.GetFullPath(path);
+        return access == IndexAccess.Write ? OpenWriter(full) : OpenReader(full, readerWait ?? TimeSpan.FromSeconds(30));
+    }
+
+    private static IndexFile OpenWriter(string path)
+    {
+        var writerLock = WriterLock.Acquire(path);
+        LiteDatabase? database = null;
+        try
+        {
+            bool isNew = !File.Exists(path);
+            if (!isNew)
+            {
+                CheckLooksLikeLiteDb(path);
+            }
+
+            database = Wrap(path, () => OpenEngine(path, null, null, readOnly: false));
+            var file = new IndexFile(path, IndexAccess.Write, database, writerLock, null, null, null);
+            database.CheckpointSize = 0;
+
+            // A writer killed between creating the file and its first commit leaves an empty LiteDB file: adopt it.
+            if (isNew || !database.GetCollectionNames().Any())
+            {
+                file.WriteSchema();
+            }
+            else
+            {
+                file.ReadSchema();
+            }
+
+            file.TryCheckpoint();
+            return file;
+        }
+        catch
+        {
+            database?.Dispose();
+            writerLock.Dispose();
+            throw;
+        }
+    }
+
+    private static IndexFile OpenReader(string path, TimeSpan wait)
+    {
+        if (!File.Exists(path))
+        {
+            throw new IndexFileException(path, IndexFileProblem.NotFound, $"{path} does not exist: build it first with ingest, or check the --index path.");
+        }
+
+        CheckLooksLikeLiteDb(path);
+        var hold = ReaderRegistry.Enter(path, wait);
+        Stream? data = null;
+        Stream? log = null;
+        LiteDatabase? database = null;
+        try
+        {
+            data = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete);
+            string journal = JournalPathFor(path);
+            log = File.Exists(journal)
+                ? new FileStream(journal, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete)
+                : new MemoryStream();
+            var opened = Wrap(path, () => OpenEngine(path, data, log, readOnly: true));
+            database = opened;
+            var file = new IndexFile(path, IndexAccess.Read, opened, null, hold, data, log);
+            file.ReadSchema();
+            return file;
+        }
+        catch
+        {
+            database?.Dispose();
+            data?.Dispose();
+            log?.Dispose();
+            hold.Dispose();
+            throw;
+        }
+    }
+
+    private void WriteSchema()
+    {
+        Database.GetCollection(MetaCollection).Upsert(new BsonDocument
+        {
+            ["_id"] = SchemaId,
+            ["version"] = CurrentSchemaVersion,
+            ["created"] = DateTime.UtcNow,
+            ["application"] = "Lookup",
+        });
+        SchemaVersion = CurrentSchemaVersion;
+    }
+
+    private void ReadSchema()
+    {
+        BsonDocument? schema;
+        try
+        {
+            schema = Database.CollectionExists(MetaCollection) ? Database.GetCollection(MetaCollection).FindById(SchemaId) : null;
+        }
+        catch (LiteException error)
+        {
+            throw Damaged(Path, error);
+        }
+
+        if (schema is null || !schema["version"].IsInt32)
+        {
+            throw new IndexFileException(Path, IndexFileProblem.NotAnIndex, $"{Path} is a LiteDB file but not a Lookup index (no schema record). Point --index at a .lookup file made by ingest.");
+        }
+
+        SchemaVersion = schema["version"].AsInt32;
+        if (SchemaVersion > CurrentSchemaVersion)
+        {
+            throw new IndexFileException(Path, IndexFileProblem.NewerSchema, $"{Path} uses index schema {SchemaVersion}; this Lookup reads schema {CurrentSchemaVersion} and older. Update Lookup to open it.");
+        }
+    }
+
+    private static void CheckLooksLikeLiteDb(string path)
+    {
+        var head = new byte[8192];
+        int read;
+        try
+        {
+            using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete);
+            read = stream.ReadAtLeast(head, head.Length, throwOnEndOfStream: false);
+        }
+        catch (IOException error)
+        {
+            throw new IndexFileException(path, IndexFileProblem.NotAnIndex, $"{path} cannot be read: {error.Message}", error);
+        }
+
+        if (read < head.Length || !head.AsSpan(32, LiteDbMagic.Length).SequenceEqual(LiteDbMagic))
+        {
+            throw new IndexFileException(
+                path,
+                IndexFileProblem.NotAnIndex,
+                read < head.Length
+                    ? $"{path} is {read} bytes long, shorter than one LiteDB page (8192): it is truncated or not an index. Restore it from a backup or rebuild it with ingest."
+                    : $"{path} is not a Lookup index (no LiteDB header). Point --index at a .lookup file made by ingest.");
+        }
+    }
+
+    private static LiteDatabase Wrap(string path, Func<LiteDatabase> open)
+    {
+        try
+        {
+            return open();
+        }
+        catch (Exception error) when (error is LiteException or IOException or InvalidCastException or ArgumentException or IndexOutOfRangeException or OverflowException)
+        {
+            throw Damaged(path, error);
+        }
+    }
+
+    private static IndexFileException Damaged(string path, Exception error) =>
+        new(path, IndexFileProblem.NotAnIndex, $"{path} could not be opened as an index ({error.Message}). It may be damaged: restore it from a backup or rebuild it with ingest.", error);
+}

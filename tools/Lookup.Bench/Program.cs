@@ -1,0 +1,44 @@
+namespace Lookup.Bench;
+
+/// <summary>
+/// Benchmarks and data tools. Usage:
+///   dotnet run -c Release --project tools/Lookup.Bench -- graph [--quick]
+///   dotnet run -c Release --project tools/Lookup.Bench -- params [--quick]   (M × EfConstruction × EfSearch sweep)
+///   dotnet run -c Release --project tools/Lookup.Bench -- kernel            (dot-product kernel vs TensorPrimitives)
+///   dotnet run -c Release --project tools/Lookup.Bench -- crash-test [--rounds 8]   (kill -9 a writer, reopen, check)
+///   dotnet run -c Release --project tools/Lookup.Bench -- prepare          (embeds and caches the bench vectors)
+///   dotnet run -c Release --project tools/Lookup.Bench -- extract-fashion-mnist [--count 2000]
+/// </summary>
+internal static class Program
+{
+    private static int Main(string[] args)
+    {
+        string command = args.Length > 0 ? args[0] : "";
+        bool quick = args.Contains("--quick");
+        return command switch
+        {
+            "graph" => GraphBench.Run(quick),
+            "extract-fashion-mnist" => ExtractFashionMnist.Run(args),
+            "prepare" => Prepare(),
+            "kernel" => KernelBench.Run(),
+            "params" => ParameterSweep.Run(quick),
+            "crash-test" => CrashTest.Run(args),
+            "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
+            _ => Usage(),
+        };
+    }
+
+    /// <summary>Computes and caches the embeddings the full graph bench uses (slow once: ResNet18 on 11,000 images).</summary>
+    private static int Prepare()
+    {
+        _ = Datasets.Real("train", 10_000);
+        _ = Datasets.Real("t10k", 1_000);
+        return 0;
+    }
+
+    private static int Usage()
+    {
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | kernel | crash-test [--rounds N] | prepare | extract-fashion-mnist [--count N]");
+        return 2;
+    }
+}
