@@ -1,7 +1,7 @@
 using System.Buffers.Binary;
 using System.IO.Compression;
 
-namespace Lookup.Tests.ReferenceData;
+namespace Lookup.Tests.Datasets;
 
 /// <summary>
 /// Reads Fashion-MNIST (Xiao, Rasul &amp; Vollgraf 2017, https://github.com/zalandoresearch/fashion-mnist, MIT)

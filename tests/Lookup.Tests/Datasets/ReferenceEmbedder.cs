@@ -1,7 +1,7 @@
 using Microsoft.ML.OnnxRuntime;
 using Microsoft.ML.OnnxRuntime.Tensors;
 
-namespace Lookup.Tests.ReferenceData;
+namespace Lookup.Tests.Datasets;
 
 /// <summary>
 /// A minimal, private ResNet18 feature extractor for 28×28 grey reference images, used by the graph tests and

@@ -1,6 +1,6 @@
 using System.IO.Compression;
 
-namespace Lookup.Tests.ReferenceData;
+namespace Lookup.Tests.Datasets;
 
 /// <summary>
 /// Float matrices saved with a small header (rows, columns): raw float32 for the bench's local cache, and gzip

@@ -1,4 +1,4 @@
-namespace Lookup.Tests.ReferenceData;
+namespace Lookup.Tests.Datasets;
 
 /// <summary>Finds tests/reference-data/ from the test binaries (walks up to the repository root).</summary>
 internal static class ReferencePaths
