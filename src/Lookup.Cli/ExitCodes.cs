@@ -16,4 +16,7 @@ internal static class ExitCodes
 
     /// <summary>A sweep found findings that were not in the previous sweep (of the kinds asked for).</summary>
     public const int NewFindings = 3;
+
+    /// <summary>Stopped by Ctrl+C (SIGINT); work already committed is kept (128 + 2, common practice for shells).</summary>
+    public const int Interrupted = 130;
 }
