@@ -27,12 +27,19 @@ internal static class CrashTest
         for (int round = 1; round <= rounds; round++)
         {
             using var child = StartWriter(path, round);
-            var (reads, readFailures, holderNamed) = ReadWhileWriting(path, child, TimeSpan.FromMilliseconds(random.Next(500, 3000)));
+            int lastReported = -1;
+            child.OutputDataReceived += (_, line) =>
+            {
+                if (int.TryParse(line.Data, out int count))
+                {
+                    Volatile.Write(ref lastReported, count);
+                }
+            };
+            child.BeginOutputReadLine();
+            var (reads, readFailures, holderNamed) = ReadWhileWriting(path, child, () => Volatile.Read(ref lastReported) >= 0, TimeSpan.FromMilliseconds(random.Next(500, 3000)));
             failures += readFailures > 0 ? 1 : 0;
             child.Kill();
             child.WaitForExit();
-            string said = child.StandardOutput.ReadToEnd();
-            int lastReported = said.Split('\n', StringSplitOptions.RemoveEmptyEntries).Select(int.Parse).DefaultIfEmpty(-1).Last();
 
             var watch = Stopwatch.StartNew();
             using var file = IndexFile.Open(path, IndexAccess.Write);
@@ -61,7 +68,7 @@ internal static class CrashTest
     /// While the child writes: a second writer must be refused naming the child's pid, and readers opened
     /// again and again must each see a whole number of batches that passes CheckIntegrity and answers a search.
     /// </summary>
-    private static (int Reads, int Failures, bool HolderNamed) ReadWhileWriting(string path, Process child, TimeSpan duration)
+    private static (int Reads, int Failures, bool HolderNamed) ReadWhileWriting(string path, Process child, Func<bool> childHoldsLock, TimeSpan duration)
     {
         var deadline = DateTime.UtcNow + duration;
         int reads = 0, failures = 0;
@@ -74,10 +81,18 @@ internal static class CrashTest
                 continue;
             }
 
+            // Only once the child has committed (so it surely holds the lock), else the test races its start-up.
             try
             {
+                if (!childHoldsLock())
+                {
+                    throw new IndexFileException(path, IndexFileProblem.WriterActive, "child still starting");
+                }
+
                 using var second = IndexFile.Open(path, IndexAccess.Write);
-                Console.WriteLine("  a second writer was NOT refused");
+                Console.WriteLine(child.HasExited
+                    ? $"  the writer process died by itself (exit code {child.ExitCode}) before the kill"
+                    : "  a second writer was NOT refused while the writer process was alive");
                 failures++;
             }
             catch (IndexFileException error) when (error.Problem == IndexFileProblem.WriterActive)
@@ -116,6 +131,8 @@ internal static class CrashTest
     /// <summary>The child: open as writer, then insert/delete/commit batches until killed, printing each committed count.</summary>
     public static int Writer(string path, int seed)
     {
+        // Checkpoint after almost every commit, so some kills land inside a checkpoint.
+        IndexFile.CheckpointThreshold = 256 << 10;
         using var file = IndexFile.Open(path, IndexAccess.Write);
         var store = new GraphStore(file);
         var parameters = new HnswParameters(M: 8, EfConstruction: 48, ExactBelow: 0);
