@@ -1,6 +1,6 @@
 using System.Diagnostics;
 using Lookup.Graph;
-using Lookup.Tests.ReferenceData;
+using Lookup.Tests.Datasets;
 
 namespace Lookup.Bench;
 

@@ -1,4 +1,4 @@
-using Lookup.Tests.ReferenceData;
+using Lookup.Tests.Datasets;
 
 namespace Lookup.Tests.Graph;
 

@@ -1,5 +1,5 @@
 using Lookup.Graph;
-using Lookup.Tests.ReferenceData;
+using Lookup.Tests.Datasets;
 using Xunit.Abstractions;
 
 namespace Lookup.Tests.Graph;

@@ -1,0 +1,212 @@
+using System.CommandLine;
+using System.Globalization;
+using System.Text.Json;
+using Lookup.Catalogue;
+using Lookup.Cli.Output;
+using Lookup.Imaging;
+using Lookup.Store;
+
+namespace Lookup.Cli;
+
+/// <summary><c>lookup ingest TREE --index FILE</c>: bring an index up to date with a photo tree.</summary>
+internal static class IngestCommand
+{
+    private const int FailuresShown = 20;
+
+    private static readonly JsonSerializerOptions Json = new()
+    {
+        PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
+        WriteIndented = true,
+        Converters = { new System.Text.Json.Serialization.JsonStringEnumConverter() },
+    };
+
+    public static Command Create()
+    {
+        var tree = new Argument<string>("photo-tree") { Description = "The folder of catalogue photos." };
+        var index = IndexOption.Create();
+        var skuFrom = new Option<string>("--sku-from")
+        {
+            Description = "Where SKUs come from: folder (the photo's folder name), csv:FILE (file,sku rows) or pattern:REGEX (named group 'sku').",
+            DefaultValueFactory = _ => "folder",
+        };
+        var workers = new Option<int>("--workers")
+        {
+            Description = "Worker threads, each reading, decoding and embedding whole photos.",
+            DefaultValueFactory = _ => Environment.ProcessorCount,
+        };
+        var keepMissing = new Option<bool>("--keep-missing") { Description = "Keep photos whose files are gone instead of retiring them." };
+        var retryFailed = new Option<bool>("--retry-failed") { Description = "Try again photos that failed before, even if unchanged." };
+        var maxMegapixels = new Option<double>("--max-megapixels")
+        {
+            Description = "Refuse photos larger than this many megapixels (read from the header, before decoding).",
+            DefaultValueFactory = _ => PhotoLimits.Default.MaxPixels / 1e6,
+        };
+        var shard = new Option<string?>("--shard") { Description = "Process only shard K of N (K/N, 1-based), chosen by a hash of each photo's relative path." };
+        var json = new Option<bool>("--json") { Description = "Print the summary as JSON on stdout." };
+        var quiet = new Option<bool>("--quiet") { Description = "No progress on stderr." };
+        var model = ModelOption.Create();
+        var command = new Command(
+            "ingest",
+            """
+            Index a photo tree: new and changed photos are embedded, moved ones recognised by content, gone ones retired.
+            An unchanged tree is re-read in seconds. Safe to stop (Ctrl+C commits what is done) and to re-run after a crash.
+
+            Example:
+              lookup ingest /srv/photos --index parts.lookup
+              lookup ingest /srv/photos --index parts.lookup --sku-from csv:/srv/photos/skus.csv --json
+
+            Exit codes: 0 all photos indexed, 1 some photos failed (listed) or the index could not be used,
+            2 usage error, 130 stopped by Ctrl+C (what was done is kept).
+            """)
+        {
+            tree, index, skuFrom, workers, keepMissing, retryFailed, maxMegapixels, shard, json, quiet, model,
+        };
+        command.SetAction((parseResult, cancellationToken) => Task.FromResult(Run(
+            new IngestRequest(
+                parseResult.GetValue(tree)!,
+                parseResult.GetValue(index)!,
+                parseResult.GetValue(skuFrom)!,
+                parseResult.GetValue(workers),
+                parseResult.GetValue(keepMissing),
+                parseResult.GetValue(retryFailed),
+                parseResult.GetValue(maxMegapixels),
+                parseResult.GetValue(shard),
+                parseResult.GetValue(json),
+                parseResult.GetValue(quiet),
+                parseResult.GetValue(model)),
+            parseResult.InvocationConfiguration.Output,
+            parseResult.InvocationConfiguration.Error,
+            cancellationToken)));
+        return command;
+    }
+
+    internal static int Run(IngestRequest request, TextWriter output, TextWriter error, CancellationToken cancellationToken)
+    {
+        if (request.Workers < 1 || request.MaxMegapixels <= 0)
+        {
+            error.WriteLine("lookup ingest: --workers must be at least 1 and --max-megapixels above 0.");
+            return ExitCodes.Usage;
+        }
+
+        ShardSpec? shard = null;
+        if (request.Shard is not null)
+        {
+            try
+            {
+                shard = ShardSpec.Parse(request.Shard);
+            }
+            catch (FormatException e)
+            {
+                error.WriteLine($"lookup ingest: {e.Message}");
+                return ExitCodes.Usage;
+            }
+        }
+
+        if (!Directory.Exists(request.Tree))
+        {
+            error.WriteLine($"lookup ingest: {request.Tree} is not a folder; give the folder that holds the catalogue photos.");
+            return ExitCodes.Usage;
+        }
+
+        using var embedder = ModelOption.TryLoad(request.Model, "ingest", error);
+        if (embedder is null)
+        {
+            return ExitCodes.Failures;
+        }
+
+        var options = new IngestOptions
+        {
+            Root = request.Tree,
+            SkuMapping = request.SkuFrom,
+            Workers = request.Workers,
+            KeepMissing = request.KeepMissing,
+            RetryFailed = request.RetryFailed,
+            Limits = PhotoLimits.Default with { MaxPixels = (long)(request.MaxMegapixels * 1e6) },
+            Shard = shard,
+        };
+        var progressLine = new ProgressLine(error, request.Quiet);
+        IngestSummary summary;
+        try
+        {
+            using var file = IndexFile.Open(request.Index, IndexAccess.Write);
+            var progress = new SynchronousProgress<IngestProgress>(p => progressLine.Report(p.Stage, p.Done, p.Total, p.Failed, p.Total > 0 && p.Done == p.Total));
+            summary = new CatalogueIngest(file, embedder).Run(options, progress, cancellationToken);
+        }
+        catch (Exception e) when (e is IndexFileException or SkuMappingException)
+        {
+            progressLine.Finish();
+            error.WriteLine($"lookup ingest: {e.Message}");
+            return ExitCodes.Failures;
+        }
+
+        progressLine.Finish();
+        if (request.Json)
+        {
+            output.WriteLine(JsonSerializer.Serialize(ToJson(summary, request), Json));
+        }
+        else
+        {
+            WriteText(summary, request, output);
+        }
+
+        return summary.Cancelled ? ExitCodes.Interrupted : summary.Failed > 0 ? ExitCodes.Failures : ExitCodes.Success;
+    }
+
+    private static void WriteText(IngestSummary s, IngestRequest request, TextWriter output)
+    {
+        var table = new TextTable("new", "changed", "unchanged", "moved", "updated", "retired", "failed", "unmapped", "time", "rate")
+            .AlignRight(0, 1, 2, 3, 4, 5, 6, 7, 8, 9);
+        table.Add(s.New, s.Changed, s.Unchanged, s.Moved, s.Updated, s.Retired, s.Failed, s.Unmapped,
+            ProgressLine.FormatDuration(s.Elapsed), string.Create(CultureInfo.InvariantCulture, $"{s.PhotosPerSecond:0.0}/s"));
+        output.Write(table.ToString());
+        output.WriteLine($"{request.Index}: {s.IndexedTotal} photos indexed.{(s.Cancelled ? " Stopped early: run the same command again to finish." : "")}");
+        if (s.OtherShards > 0)
+        {
+            output.WriteLine($"{s.OtherShards} photos belong to other shards and were left to them.");
+        }
+
+        foreach (var failure in s.Failures.Take(FailuresShown))
+        {
+            output.WriteLine($"failed  {failure.Path}: {failure.Message}");
+        }
+
+        if (s.Failures.Count > FailuresShown)
+        {
+            output.WriteLine($"… and {s.Failures.Count - FailuresShown} more failures (all are listed with --json).");
+        }
+
+        foreach (var problem in s.MappingProblems.Take(FailuresShown))
+        {
+            output.WriteLine($"sku     {problem.Message}");
+        }
+
+        foreach (var problem in s.ScanProblems.Take(FailuresShown))
+        {
+            output.WriteLine($"scan    {problem.Message}");
+        }
+    }
+
+    private static object ToJson(IngestSummary s, IngestRequest request) => new
+    {
+        index = request.Index,
+        s.Scanned,
+        s.New,
+        s.Changed,
+        s.Unchanged,
+        s.Moved,
+        s.Updated,
+        s.Retired,
+        s.KeptMissing,
+        s.Failed,
+        s.Unmapped,
+        s.OtherShards,
+        s.Embedded,
+        s.IndexedTotal,
+        elapsedSeconds = Math.Round(s.Elapsed.TotalSeconds, 3),
+        photosPerSecond = Math.Round(s.PhotosPerSecond, 2),
+        s.Cancelled,
+        failures = s.Failures,
+        mappingProblems = s.MappingProblems.Select(p => new { kind = p.Kind.ToString(), severity = p.Severity.ToString(), p.Path, p.Line, p.Message }),
+        scanProblems = s.ScanProblems.Select(p => new { kind = p.Kind.ToString(), path = p.RelativePath, p.Message }),
+    };
+}

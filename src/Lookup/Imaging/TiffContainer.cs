@@ -1,0 +1,153 @@
+using System.Buffers.Binary;
+
+namespace Lookup.Imaging;
+
+/// <summary>
+/// Walks the IFD chain of a classic TIFF file (TIFF 6.0, section 2) to count pages, and checks that the strips or
+/// tiles of the first page lie inside the file. BigTIFF is left to the decoder and counted as one page.
+/// </summary>
+internal static class TiffContainer
+{
+    private const ushort StripOffsets = 273;
+    private const ushort StripByteCounts = 279;
+    private const ushort TileOffsets = 324;
+    private const ushort TileByteCounts = 325;
+    private const ushort TypeShort = 3;
+    private const ushort TypeLong = 4;
+    private const int MaxPages = 1_000_000;
+
+    public static ContainerScan Scan(ReadOnlySpan<byte> data)
+    {
+        if (data.Length < 8)
+        {
+            return ContainerScan.Broken("no TIFF header");
+        }
+
+        var little = data[0] == (byte)'I' && data[1] == (byte)'I';
+        var big = data[0] == (byte)'M' && data[1] == (byte)'M';
+        if (!little && !big)
+        {
+            return ContainerScan.Broken("no TIFF byte-order mark");
+        }
+
+        var reader = new Reader(data, little);
+        var version = reader.U16(2);
+        if (version == 43)
+        {
+            return ContainerScan.Whole(1);
+        }
+
+        if (version != 42)
+        {
+            return ContainerScan.Broken($"unknown TIFF version {version}");
+        }
+
+        long offset = reader.U32(4);
+        var pages = 0;
+        while (offset != 0)
+        {
+            if (offset + 2 > data.Length)
+            {
+                return ContainerScan.Broken("a page directory lies beyond the end of the file");
+            }
+
+            var entries = reader.U16((int)offset);
+            var next = offset + 2 + (12L * entries);
+            if (next + 4 > data.Length)
+            {
+                return ContainerScan.Broken("ends inside a page directory");
+            }
+
+            if (pages == 0 && !PixelDataFits(reader, (int)offset + 2, entries, data.Length))
+            {
+                return ContainerScan.Broken("the first page's image data lies beyond the end of the file");
+            }
+
+            pages++;
+            var following = (long)reader.U32((int)next);
+            if (pages > MaxPages || following == offset)
+            {
+                return ContainerScan.Broken("the page directories form a loop");
+            }
+
+            offset = following;
+        }
+
+        return pages > 0 ? ContainerScan.Whole(pages) : ContainerScan.Broken("has no page");
+    }
+
+    private static bool PixelDataFits(Reader reader, int first, int entries, long length)
+    {
+        int offsets = -1, counts = -1;
+        for (var i = 0; i < entries; i++)
+        {
+            var entry = first + (12 * i);
+            var tag = reader.U16(entry);
+            if (tag is StripOffsets or TileOffsets)
+            {
+                offsets = entry;
+            }
+            else if (tag is StripByteCounts or TileByteCounts)
+            {
+                counts = entry;
+            }
+        }
+
+        if (offsets < 0 || counts < 0)
+        {
+            return true;
+        }
+
+        var count = reader.U32(offsets + 4);
+        if (count != reader.U32(counts + 4))
+        {
+            return true;
+        }
+
+        for (long i = 0; i < count; i++)
+        {
+            var start = reader.Value(offsets, i);
+            var size = reader.Value(counts, i);
+            if (start < 0 || size < 0 || start + size > length)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    private readonly ref struct Reader(ReadOnlySpan<byte> data, bool little)
+    {
+        private readonly ReadOnlySpan<byte> data = data;
+
+        public ushort U16(int at) => little
+            ? BinaryPrimitives.ReadUInt16LittleEndian(data[at..])
+            : BinaryPrimitives.ReadUInt16BigEndian(data[at..]);
+
+        public uint U32(int at) => little
+            ? BinaryPrimitives.ReadUInt32LittleEndian(data[at..])
+            : BinaryPrimitives.ReadUInt32BigEndian(data[at..]);
+
+        /// <summary>Element <paramref name="index"/> of a SHORT or LONG array entry; -1 when it lies outside the file.</summary>
+        public long Value(int entry, long index)
+        {
+            var type = U16(entry + 2);
+            var count = U32(entry + 4);
+            var width = type == TypeShort ? 2 : type == TypeLong ? 4 : 0;
+            if (width == 0)
+            {
+                return -1;
+            }
+
+            long start = count * width <= 4 ? entry + 8 : U32(entry + 8);
+            var at = start + (index * width);
+            if (at + width > data.Length)
+            {
+                return -1;
+            }
+
+            return width == 2 ? U16((int)at) : U32((int)at);
+        }
+    }
+}

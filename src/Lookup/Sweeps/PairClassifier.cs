@@ -1,0 +1,153 @@
+namespace Lookup.Sweeps;
+
+/// <summary>
+/// Decides what two photos are, cheapest evidence first: equal SHA-256 → equal size, near-equal dHash and a tiny
+/// embedding distance → thumbnails aligned whole (re-encode, resize, tone, mirror) → thumbnails aligned as a crop
+/// or a small turn → otherwise a look-alike across SKUs or nothing. A small embedding distance alone never makes a
+/// copy: two studio views of one part sit as close as real copies. Holds an aligner with scratch buffers: one
+/// instance per thread.
+/// </summary>
+internal sealed class PairClassifier
+{
+    private readonly SweepOptions _options;
+    private readonly AlignmentLimits _limits;
+    private readonly ThumbnailAligner _aligner = new();
+
+    public PairClassifier(SweepOptions options)
+    {
+        _options = options;
+        _limits = AlignmentLimits.From(options);
+    }
+
+    /// <param name="a">First photo.</param>
+    /// <param name="thumbA">Its thumbnail, or null when none is available.</param>
+    /// <param name="b">Second photo.</param>
+    /// <param name="thumbB">Its thumbnail, or null.</param>
+    /// <param name="distance">Cosine distance of their embeddings.</param>
+    public (PairRelation Relation, PairEvidence Evidence) Classify(
+        SweepPhoto a, GreyThumbnail? thumbA, SweepPhoto b, GreyThumbnail? thumbB, float distance)
+    {
+        var evidence = new PairEvidence(
+            distance,
+            DHashBits.Distance(a.DHash, b.DHash),
+            DHashBits.Distance(a.DHash, DHashBits.Mirror(b.DHash)),
+            null,
+            AlignmentHypothesis.FullFrame,
+            CopyEdits.None);
+
+        if (string.Equals(a.Sha256, b.Sha256, StringComparison.OrdinalIgnoreCase))
+        {
+            return (PairRelation.IdenticalBytes, evidence);
+        }
+
+        if (a.Width == b.Width && a.Height == b.Height &&
+            evidence.HashDistance <= _options.SamePixelsMaxHashDistance &&
+            distance <= _options.SamePixelsMaxDistance)
+        {
+            return (PairRelation.SamePixels, evidence);
+        }
+
+        if (distance <= _options.CopyMaxDistance)
+        {
+            if (thumbA is not null && thumbB is not null)
+            {
+                var (best, passed) = BestAlignment(a, thumbA, b, thumbB, distance);
+                evidence = evidence with { Correlation = best.Correlation, Alignment = best.Hypothesis };
+                if (passed)
+                {
+                    var (container, content) = best.ContainerIsA ? (a, b) : (b, a);
+                    return (PairRelation.Copy, evidence with { Edits = EditsOf(best.Hypothesis, container, content) });
+                }
+            }
+            else if (CopyByHash(a, b, evidence) is { } edits)
+            {
+                return (PairRelation.Copy, evidence with { Edits = edits });
+            }
+        }
+
+        var relation = distance <= _options.LookAlikeMaxDistance && !SameSku(a, b) ? PairRelation.LookAlike : PairRelation.None;
+        return (relation, evidence);
+    }
+
+    private static bool SameSku(SweepPhoto a, SweepPhoto b) => string.Equals(a.Sku, b.Sku, StringComparison.Ordinal);
+
+    private bool SameAspect(SweepPhoto a, SweepPhoto b) =>
+        Math.Abs(Math.Log(a.AspectRatio / b.AspectRatio)) <= _options.AspectTolerance;
+
+    /// <summary>Without thumbnails: same aspect ratio and a near-equal dHash (either way round), or no copy.</summary>
+    private CopyEdits? CopyByHash(SweepPhoto a, SweepPhoto b, in PairEvidence evidence)
+    {
+        var mirrored = evidence.MirroredHashDistance < evidence.HashDistance;
+        var bits = Math.Min(evidence.HashDistance, evidence.MirroredHashDistance);
+        if (!SameAspect(a, b) || bits > _options.CopyMaxHashDistanceWithoutThumbnails)
+        {
+            return null;
+        }
+
+        return (SameSize(a, b) ? CopyEdits.None : CopyEdits.Resized) | (mirrored ? CopyEdits.Mirrored : CopyEdits.None);
+    }
+
+    /// <summary>
+    /// The whole frames first (one dot product each way, against the stricter whole-frame bar); the crop and turn
+    /// search only if they fail and the pair is close enough for a crop. Returns the best alignment and whether it
+    /// passed its bar.
+    /// </summary>
+    private (AlignmentResult Best, bool Passed) BestAlignment(
+        SweepPhoto a, GreyThumbnail thumbA, SweepPhoto b, GreyThumbnail thumbB, float distance)
+    {
+        var best = AlignmentResult.None;
+        if (SameAspect(a, b))
+        {
+            var (plain, mirrored) = _aligner.FullFrame(thumbA, thumbB);
+            best = new AlignmentResult(
+                Math.Max(plain, mirrored), AlignmentHypothesis.FullFrame with { Mirrored = mirrored > plain }, true);
+            if (best.Correlation >= _options.WholeFrameMinCorrelation)
+            {
+                return (best, true);
+            }
+        }
+
+        if (distance > _options.CropMaxDistance)
+        {
+            return (best, false);
+        }
+
+        var searched = _aligner.Search(PhotoShape.Of(a), thumbA, PhotoShape.Of(b), thumbB, _limits);
+        return searched.Correlation >= _options.AlignedMinCorrelation
+            ? (searched, true)
+            : (searched.Correlation > best.Correlation ? searched : best, false);
+    }
+
+    private static bool SameSize(SweepPhoto a, SweepPhoto b) => a.Width == b.Width && a.Height == b.Height;
+
+    /// <summary>Names the edits a placement implies; small tolerances absorb the search's step sizes.</summary>
+    private CopyEdits EditsOf(in AlignmentHypothesis h, SweepPhoto container, SweepPhoto content)
+    {
+        var edits = CopyEdits.None;
+        if (h.Mirrored)
+        {
+            edits |= CopyEdits.Mirrored;
+        }
+
+        if (Math.Abs(h.AngleDegrees) >= 1f)
+        {
+            edits |= CopyEdits.Rotated;
+        }
+
+        var cropped = h.Scale < 0.97f || !SameAspect(container, content);
+        if (cropped && Math.Abs(h.AngleDegrees) < 1f)
+        {
+            edits |= CopyEdits.Cropped;
+        }
+
+        // A straightened photo is enlarged by the turn's own zoom; only a shrink beyond that counts as a resize then.
+        var fitWidth = Math.Min(container.Width, content.AspectRatio * container.Height);
+        var ratio = content.Width / (h.Scale * fitWidth);
+        if (ratio < 0.97 || (ratio > 1.03 && !edits.HasFlag(CopyEdits.Rotated)))
+        {
+            edits |= CopyEdits.Resized;
+        }
+
+        return edits;
+    }
+}

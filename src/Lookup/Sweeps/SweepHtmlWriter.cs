@@ -1,0 +1,138 @@
+using System.Globalization;
+using Lookup.Reports;
+
+namespace Lookup.Sweeps;
+
+/// <summary>
+/// The report as one self-contained HTML page: no network and no other files (previews are data: URIs, style and
+/// script inline, and a content security policy forbids any fetch). Findings are grouped and can be filtered by kind;
+/// each shows its photos side by side with SKU, path and role, its pairs with distance and evidence, and its verdict.
+/// Every name, SKU and path is escaped (<see cref="HtmlText"/>).
+/// </summary>
+public static class SweepHtmlWriter
+{
+    /// <summary>Writes the page.</summary>
+    /// <param name="report">The report.</param>
+    /// <param name="writer">Where the page goes (write it as UTF-8).</param>
+    /// <param name="previews">JPEG previews of photos; without it each photo shows a "no preview" box.</param>
+    /// <param name="maxFindings">Findings shown; the rest are counted (the CSV and JSON hold all).</param>
+    /// <param name="maxPairsPerFinding">Pairs listed per finding; the rest are counted.</param>
+    public static void Write(
+        SweepReport report, TextWriter writer, ReportThumbnailSource? previews = null, int maxFindings = 2000, int maxPairsPerFinding = 50)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        ArgumentNullException.ThrowIfNull(writer);
+        ArgumentOutOfRangeException.ThrowIfNegative(maxFindings);
+        ArgumentOutOfRangeException.ThrowIfNegative(maxPairsPerFinding);
+        var images = new Dictionary<int, string?>();
+        writer.Write("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">");
+        writer.Write($"<meta http-equiv=\"Content-Security-Policy\" content=\"{SweepHtmlPage.ContentSecurityPolicy}\">");
+        writer.Write($"<title>Catalogue sweep {Time(report.StartedAt)}</title><style>{SweepHtmlPage.Style}</style></head><body>\n");
+        writer.Write($"<h1>Catalogue sweep, {Time(report.StartedAt)}</h1>\n");
+        writer.Write($"<p class=\"notice\">{E(report.Notice)}</p>\n");
+        WriteSummary(report, writer);
+        for (var f = 0; f < Math.Min(report.Findings.Count, maxFindings); f++)
+        {
+            WriteFinding(report.Findings[f], f + 1, writer, previews, images, maxPairsPerFinding);
+        }
+
+        if (report.Findings.Count > maxFindings)
+        {
+            writer.Write($"<p class=\"muted\">{report.Findings.Count - maxFindings} more findings are in the CSV and JSON reports.</p>\n");
+        }
+
+        writer.Write($"<script>{SweepHtmlPage.Script}</script>\n</body></html>\n");
+    }
+
+    private static string E(string? text) => HtmlText.Escape(text);
+
+    private static string Time(DateTimeOffset t) => t.UtcDateTime.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture);
+
+    private static string N(double value, string format) => value.ToString(format, CultureInfo.InvariantCulture);
+
+    private static void WriteSummary(SweepReport report, TextWriter writer)
+    {
+        var c = report.Counts;
+        writer.Write("<table class=\"summary\">");
+        writer.Write($"<tr><th>Photos</th><td>{c.Photos}</td><th>SKUs</th><td>{c.Skus}</td><th>Pairs examined</th><td>{c.PairsExamined}</td></tr>");
+        writer.Write($"<tr><th>Identical files</th><td>{c.IdenticalPairs}</td><th>Same pixels</th><td>{c.SamePixelPairs}</td><th>Copies</th><td>{c.CopyPairs}</td></tr>");
+        writer.Write($"<tr><th>Look-alike pairs</th><td>{c.LookAlikePairs}</td><th>Views inside one SKU (not reported)</th><td>{c.OtherViewPairs}</td>");
+        writer.Write($"<th>Dismissed / already reported</th><td>{c.SuppressedByDecisions} / {c.AlreadyReported}</td></tr></table>\n");
+        writer.Write("<p class=\"filters\">Show: ");
+        foreach (var (kind, count) in report.FindingsByKind)
+        {
+            writer.Write($"<label><input type=\"checkbox\" checked data-kind=\"{FindingKindText.Code(kind)}\"> {E(FindingKindText.Label(kind))} ({count})</label>");
+        }
+
+        writer.Write("</p>\n");
+    }
+
+    private static void WriteFinding(
+        SweepFinding finding, int number, TextWriter writer, ReportThumbnailSource? previews, Dictionary<int, string?> images, int maxPairs)
+    {
+        writer.Write($"<section class=\"finding\" data-kind=\"{FindingKindText.Code(finding.Kind)}\" id=\"f{number}\">");
+        writer.Write($"<h2>{number}. {E(FindingKindText.Label(finding.Kind))}</h2><p>{E(finding.Verdict)}</p><div class=\"photos\">");
+        foreach (var member in finding.Members)
+        {
+            WriteFigure(member, writer, previews, images);
+        }
+
+        writer.Write("</div>");
+        if (finding.Outlier is { } o)
+        {
+            writer.Write($"<p>Distance to its own SKU {N(o.DistanceToOwnSku, "0.000")}");
+            writer.Write(o.OwnSkuSpread is { } spread ? $" (typical in the SKU {N(spread, "0.000")})" : "");
+            writer.Write($"; to SKU {E(o.NearestOtherSku)} {N(o.DistanceToOtherSku, "0.000")}.</p>");
+        }
+
+        WritePairs(finding, writer, maxPairs);
+        writer.Write($"<p class=\"muted\">Key {E(finding.Key)}</p></section>\n");
+    }
+
+    private static void WriteFigure(FindingMember member, TextWriter writer, ReportThumbnailSource? previews, Dictionary<int, string?> images)
+    {
+        if (!images.TryGetValue(member.PhotoId, out var uri))
+        {
+            var jpeg = previews?.Invoke(member);
+            uri = jpeg is { Length: > 0 } ? "data:image/jpeg;base64," + Convert.ToBase64String(jpeg) : null;
+            images[member.PhotoId] = uri;
+        }
+
+        writer.Write("<figure>");
+        writer.Write(uri is null
+            ? "<div class=\"nopreview\">no preview</div>"
+            : $"<img src=\"{uri}\" alt=\"{E(member.Path)}\">");
+        writer.Write($"<figcaption><b>SKU {E(member.Sku)}</b><br>{E(member.Path)}<br>");
+        writer.Write($"{member.Width} × {member.Height}, {N(member.FileSize / 1024.0, "0.#")} KB");
+        if (member.Role != MemberRole.Member)
+        {
+            writer.Write($"<br><span class=\"role\">{E(FindingKindText.Role(member.Role))}</span>");
+        }
+
+        writer.Write("</figcaption></figure>");
+    }
+
+    private static void WritePairs(SweepFinding finding, TextWriter writer, int maxPairs)
+    {
+        if (finding.Pairs.Count == 0)
+        {
+            return;
+        }
+
+        var pathOf = finding.Members.GroupBy(m => m.PhotoId).ToDictionary(g => g.Key, g => g.First().Path);
+        writer.Write("<table class=\"pairs\"><tr><th>Photo</th><th>Photo</th><th>Verdict</th><th>Distance</th><th>dHash bits</th><th>Thumbnail match</th></tr>");
+        foreach (var pair in finding.Pairs.Take(maxPairs))
+        {
+            var e = pair.Evidence;
+            writer.Write($"<tr><td>{E(pathOf.GetValueOrDefault(pair.FirstPhotoId))}</td><td>{E(pathOf.GetValueOrDefault(pair.SecondPhotoId))}</td>");
+            writer.Write($"<td>{E(FindingKindText.Relation(pair.Relation, e.Edits))}</td><td>{N(e.Distance, "0.0000")}</td>");
+            writer.Write($"<td>{e.HashDistance}</td><td>{(e.Correlation is { } c ? N(c, "0.000") : "–")}</td></tr>");
+        }
+
+        writer.Write("</table>");
+        if (finding.Pairs.Count > maxPairs)
+        {
+            writer.Write($"<p class=\"muted\">and {finding.Pairs.Count - maxPairs} more pairs</p>");
+        }
+    }
+}
