@@ -5,7 +5,7 @@ using Lookup.Tests.Datasets;
 namespace Lookup.Bench;
 
 /// <summary>
-/// The bench's vectors: ResNet18 embeddings of Fashion-MNIST images (Debian dataset-fashion-mnist; Xiao, Rasul
+/// The bench's vectors: embeddings from the product's default embedder (ResNet18) of Fashion-MNIST images (Debian dataset-fashion-mnist; Xiao, Rasul
 /// &amp; Vollgraf 2017), computed once and cached under tools/bench/cache/ (git-ignored), and noisy copies of them.
 /// </summary>
 internal static class Datasets
@@ -32,7 +32,7 @@ internal static class Datasets
     public static float[][] Real(string split, int count)
     {
         var cached = Directory.Exists(CacheDirectory)
-            ? Directory.GetFiles(CacheDirectory, $"fashion-mnist-{split}-resnet18-*.f32")
+            ? Directory.GetFiles(CacheDirectory, $"fashion-mnist-{split}-embedder-*.f32")
                 .Select(path => (path, rows: int.Parse(Path.GetFileNameWithoutExtension(path).Split('-')[^1], System.Globalization.CultureInfo.InvariantCulture)))
                 .Where(c => c.rows >= count)
                 .OrderBy(c => c.rows)
@@ -46,14 +46,10 @@ internal static class Datasets
         var images = FashionMnist.ReadImages(Path.Combine(FashionMnist.DebianDirectory, $"{split}-images-idx3-ubyte.gz"), count);
         Console.Error.WriteLine($"embedding {images.Length} {split} images with ResNet18 on {Environment.ProcessorCount} threads (cached afterwards) ...");
         var watch = Stopwatch.StartNew();
-        var vectors = ReferenceEmbedder.EmbedAll(images, Environment.ProcessorCount);
+        var vectors = FashionMnistEmbedder.EmbedAll(images, Environment.ProcessorCount);
         Console.Error.WriteLine($"  {images.Length / watch.Elapsed.TotalSeconds:F1} images/s");
-        foreach (var v in vectors)
-        {
-            CosineKernel.Normalize(v, v);
-        }
 
-        EmbeddingCache.Save(Path.Combine(CacheDirectory, $"fashion-mnist-{split}-resnet18-{count}.f32"), vectors);
+        EmbeddingCache.Save(Path.Combine(CacheDirectory, $"fashion-mnist-{split}-embedder-{count}.f32"), vectors);
         return vectors;
     }
 

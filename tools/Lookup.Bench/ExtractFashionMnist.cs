@@ -5,7 +5,7 @@ namespace Lookup.Bench;
 /// <summary>
 /// `extract-fashion-mnist`: copies the first N test images and labels of the Debian package
 /// dataset-fashion-mnist into tests/reference-data/fashion-mnist/ (idx format, gzip), for tests that must
-/// run where the package is not installed, with their ResNet18 embeddings (the reference embedder; tests
+/// run where the package is not installed, with their embeddings from the product's default embedder (tests
 /// re-embed a sample to check the committed file still matches).
 /// </summary>
 internal static class ExtractFashionMnist
@@ -25,14 +25,10 @@ internal static class ExtractFashionMnist
             images,
             labels);
         Console.WriteLine($"wrote {count} images and labels to {target}; embedding them ...");
-        var vectors = ReferenceEmbedder.EmbedAll(images, Environment.ProcessorCount);
-        foreach (var v in vectors)
-        {
-            Lookup.Graph.CosineKernel.Normalize(v, v);
-        }
+        var vectors = FashionMnistEmbedder.EmbedAll(images, Environment.ProcessorCount);
 
         EmbeddingCache.SaveHalf(Path.Combine(target, $"t10k-first{count}-resnet18-f16.bin.gz"), vectors);
-        Console.WriteLine("wrote their unit-length ResNet18 embeddings (float16)");
+        Console.WriteLine("wrote their unit-length embeddings from the default ResNet18 embedder (float16)");
         return 0;
     }
 }

@@ -4,6 +4,7 @@ namespace Lookup.Bench;
 /// Benchmarks and data tools. Usage:
 ///   dotnet run -c Release --project tools/Lookup.Bench -- graph [--quick]
 ///   dotnet run -c Release --project tools/Lookup.Bench -- params [--quick]   (M × EfConstruction × EfSearch sweep)
+///   dotnet run -c Release --project tools/Lookup.Bench -- persisted         (re-measure open + first query on the last saved 100k file)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- kernel            (dot-product kernel vs TensorPrimitives)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- crash-test [--rounds 8]   (kill -9 a writer, reopen, check)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- prepare          (embeds and caches the bench vectors)
@@ -22,6 +23,7 @@ internal static class Program
             "prepare" => Prepare(),
             "kernel" => KernelBench.Run(),
             "params" => ParameterSweep.Run(quick),
+            "persisted" => PersistedBench.Reopen(),
             "crash-test" => CrashTest.Run(args),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
             _ => Usage(),
@@ -38,7 +40,7 @@ internal static class Program
 
     private static int Usage()
     {
-        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | kernel | crash-test [--rounds N] | prepare | extract-fashion-mnist [--count N]");
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | prepare | extract-fashion-mnist [--count N]");
         return 2;
     }
 }

@@ -40,6 +40,10 @@ public sealed partial class IndexFile : IDisposable
     private const string SchemaId = "schema";
 
     private readonly WriterLock? _writerLock;
+
+    /// <summary>The journal size that triggers a checkpoint attempt; lowered only by the crash test to checkpoint often.</summary>
+    internal static long CheckpointThreshold { get; set; } = CheckpointThresholdBytes;
+
     private readonly FileStream? _readerHold;
     private readonly Stream? _dataStream;
     private readonly Stream? _logStream;
@@ -104,7 +108,7 @@ public sealed partial class IndexFile : IDisposable
             throw;
         }
 
-        if (own && JournalLength() > CheckpointThresholdBytes)
+        if (own && JournalLength() > CheckpointThreshold)
         {
             TryCheckpoint();
         }
