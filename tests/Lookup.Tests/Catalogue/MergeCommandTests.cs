@@ -48,6 +48,19 @@ public sealed class MergeCommandTests : IDisposable
     }
 
     [Fact]
+    public void Merge_without_quiet_reports_its_stages_on_stderr_and_keeps_stdout_for_the_summary()
+    {
+        string one = Write(Part(1), Photos(0, 30));
+
+        var (exitCode, output, error) = Run("merge", one, "--index", dir.Path, "--json");
+
+        Assert.Equal(0, exitCode);
+        Assert.Contains("reading 1/1", error, StringComparison.Ordinal);
+        Assert.Contains("writing 30/30", error, StringComparison.Ordinal);
+        Assert.Equal(30, JsonDocument.Parse(output).RootElement.GetProperty("added").GetInt32());
+    }
+
+    [Fact]
     public void A_refused_part_exits_1_naming_it_on_stderr_without_a_stack_trace()
     {
         string one = Write(Part(1), Photos(0, 3));
