@@ -6,6 +6,7 @@ namespace Lookup.Bench;
 ///   dotnet run -c Release --project tools/Lookup.Bench -- params [--quick]   (M × EfConstruction × EfSearch sweep)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- kernel            (dot-product kernel vs TensorPrimitives)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- crash-test [--rounds 8]   (kill -9 a writer, reopen, check)
+///   dotnet run -c Release --project tools/Lookup.Bench -- merge [--quick] [--parts 4]   (lookup merge of 100k stored vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- prepare          (embeds and caches the bench vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- extract-fashion-mnist [--count 2000]
 /// </summary>
@@ -23,6 +24,7 @@ internal static class Program
             "kernel" => KernelBench.Run(),
             "params" => ParameterSweep.Run(quick),
             "crash-test" => CrashTest.Run(args),
+            "merge" => MergeBench.Run(args),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
             _ => Usage(),
         };
@@ -38,7 +40,7 @@ internal static class Program
 
     private static int Usage()
     {
-        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | kernel | crash-test [--rounds N] | prepare | extract-fashion-mnist [--count N]");
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | prepare | extract-fashion-mnist [--count N]");
         return 2;
     }
 }

@@ -14,6 +14,7 @@ internal sealed partial class IndexMerge
         int vectors = steps.Count(s => s.Winner.Vector is not null);
         var graph = new HnswGraph(basis.Dimension, basis.Parameters, initialCapacity: Math.Max(vectors, 16));
         var records = new Dictionary<string, PhotoRecord>(steps.Count, StringComparer.Ordinal);
+        progress?.Report(new MergeProgress("building", 0, vectors));
         var buildClock = Stopwatch.StartNew();
         foreach (var step in steps)
         {
@@ -36,6 +37,7 @@ internal sealed partial class IndexMerge
 
         // Records first, graph metadata last: until Save finishes the file has no graph, and a merge that finds no
         // graph starts over, dropping records an interrupted run left behind.
+        progress?.Report(new MergeProgress("writing", 0, records.Count));
         var photos = new PhotoTable(target);
         var leftovers = photos.All().Select(r => r.Path).Where(path => !records.ContainsKey(path)).ToList();
         target.InTransaction(() =>
@@ -80,6 +82,7 @@ internal sealed partial class IndexMerge
             return new WriteResult(0, TimeSpan.Zero, records, LiveNodes(known), Cancelled: false);
         }
 
+        progress?.Report(new MergeProgress("writing", 0, work.Count));
         var graph = store.Load(basis.Settings.ModelFingerprint);
         var photos = new PhotoTable(target);
         var buildClock = new Stopwatch();

@@ -38,6 +38,7 @@ internal sealed partial class IndexMerge(IndexFile target, TimeProvider? clock =
         target.RequireWritable();
         var started = Stopwatch.StartNew();
         var paths = CheckPaths(partPaths);
+        progress?.Report(new MergeProgress("reading", 0, paths.Count));
         var photos = new PhotoTable(target);
         bool bulk = !new GraphStore(target).HasGraph;
         var basis = bulk ? null : MergeBasis.Read(target);
