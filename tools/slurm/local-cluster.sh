@@ -87,7 +87,7 @@ start() {
   record slurmctld $!
   wait_until 30 "slurmctld answering" scontrol ping
 
-  slurmd -D -f "$dir/slurm.conf" </dev/null >"$dir/log/slurmd.out" 2>&1 &
+  slurmd -D -N "$host" -f "$dir/slurm.conf" </dev/null >"$dir/log/slurmd.out" 2>&1 &
   record slurmd $!
   if ! wait_until 60 "node $host idle" node_idle; then
     tail -n 20 "$dir/log/slurmctld.log" "$dir/log/slurmd.log" "$dir/log/slurmd.out" >&2 || true

@@ -21,8 +21,8 @@ internal sealed record MergeBasis(string Source, CatalogueSettings Settings, int
         if (settings is null || !store.HasGraph)
         {
             throw new MergeRefusedException(file.Path, MergeProblem.NotIngested,
-                $"{file.Path} holds {(settings is null ? "no catalogue settings" : "no graph")}: no ingest has committed to it. " +
-                "Run (or rerun) that shard's ingest until it finishes, or leave the file out of the merge.");
+                $"{file.Path} holds {(settings is null ? "no catalogue settings" : "no graph")}: no ingest or merge has finished writing to it. " +
+                "If it is a part, rerun that shard's ingest until it finishes, or leave the file out of the merge; if it is the target, merge into a new file.");
         }
 
         var graph = store.OpenLazy();
