@@ -22,6 +22,8 @@ internal static class Program
         root.Subcommands.Add(IngestCommand.Create());
         root.Subcommands.Add(CalibrateCommand.Create());
         root.Subcommands.Add(StatusCommand.Create());
+
+        root.Subcommands.Add(MergeCommand.Create());
         return root;
     }
 }

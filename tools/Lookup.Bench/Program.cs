@@ -7,6 +7,7 @@ namespace Lookup.Bench;
 ///   dotnet run -c Release --project tools/Lookup.Bench -- persisted         (re-measure open + first query on the last saved 100k file)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- kernel            (dot-product kernel vs TensorPrimitives)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- crash-test [--rounds 8]   (kill -9 a writer, reopen, check)
+///   dotnet run -c Release --project tools/Lookup.Bench -- merge [--quick] [--parts 4]   (lookup merge of 100k stored vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- prepare          (embeds and caches the bench vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- extract-fashion-mnist [--count 2000]
 /// </summary>
@@ -25,6 +26,7 @@ internal static class Program
             "params" => ParameterSweep.Run(quick),
             "persisted" => PersistedBench.Reopen(),
             "crash-test" => CrashTest.Run(args),
+            "merge" => MergeBench.Run(args),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
             _ => Usage(),
         };
@@ -40,7 +42,7 @@ internal static class Program
 
     private static int Usage()
     {
-        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | prepare | extract-fashion-mnist [--count N]");
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | prepare | extract-fashion-mnist [--count N]");
         return 2;
     }
 }

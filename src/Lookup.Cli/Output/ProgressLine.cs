@@ -37,7 +37,8 @@ internal sealed class ProgressLine
         }
 
         TimeSpan now = _clock.Elapsed;
-        if (!force && now - _lastDrawn < (_terminal ? TerminalInterval : LogInterval))
+        // The first report always draws (now − MinValue would overflow).
+        if (!force && _lastDrawn != TimeSpan.MinValue && now - _lastDrawn < (_terminal ? TerminalInterval : LogInterval))
         {
             return;
         }

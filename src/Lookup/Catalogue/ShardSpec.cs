@@ -1,3 +1,4 @@
+using System.Buffers.Binary;
 using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
@@ -6,7 +7,8 @@ namespace Lookup.Catalogue;
 
 /// <summary>
 /// Shard <see cref="Index"/> of <see cref="Count"/> (1-based, as job arrays number tasks): a photo belongs to the shard
-/// chosen by a hash of its path relative to the catalogue root, so membership never depends on listing order.
+/// chosen by a hash of its path relative to the catalogue root (the first 8 bytes of the SHA-256 of its UTF-8 bytes,
+/// read as a little-endian integer, modulo N), so membership never depends on listing order, the machine or the run.
 /// </summary>
 internal sealed record ShardSpec(int Index, int Count)
 {
@@ -34,7 +36,8 @@ internal sealed record ShardSpec(int Index, int Count)
     {
         Span<byte> hash = stackalloc byte[32];
         SHA256.HashData(Encoding.UTF8.GetBytes(relativePath), hash);
-        ulong key = BitConverter.ToUInt64(hash);
+        // Little-endian on every machine, so a shard is the same whichever node computes it.
+        ulong key = BinaryPrimitives.ReadUInt64LittleEndian(hash);
         return (int)(key % (ulong)count) + 1;
     }
 
