@@ -66,7 +66,7 @@ internal static class DismissCommand
     private static int Run(
         string indexPath, string[] keys, string[]? pair, string? from, string note, string reviewer, bool json, TextWriter output, TextWriter error)
     {
-        if (keys.Length == 0 && pair is null && from is null)
+        if (keys.Length == 0 && pair is not { Length: > 0 } && from is null)
         {
             error.WriteLine("lookup dismiss: give a finding key, --pair PATH PATH, or --from FILE.");
             return ExitCodes.Usage;

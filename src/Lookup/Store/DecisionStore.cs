@@ -39,9 +39,10 @@ public sealed class DecisionStore
     {
         ArgumentNullException.ThrowIfNull(decision);
         _file.RequireWritable();
-        if (Find(decision.Key) is { } standing)
+        // FindById on the collection itself: it sees this transaction's own inserts, which Find's existence check does not.
+        if (Decisions.FindById(decision.Key) is { } standing)
         {
-            return standing;
+            return FromBson(standing);
         }
 
         Decisions.Insert(ToBson(decision));
