@@ -36,7 +36,8 @@ internal static partial class SweepCommand
                 AddRows(table, finding, number, result.NewKeys.Contains(finding.Key));
             }
 
-            output.Write(table.ToString());
+            // Continuation rows leave the last column empty: no trailing blanks.
+            output.Write(string.Join('\n', table.ToString().Split('\n').Select(line => line.TrimEnd())));
         }
 
         output.WriteLine();

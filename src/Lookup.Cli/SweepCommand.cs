@@ -236,7 +236,7 @@ internal static partial class SweepCommand
         notStoredReason = result.Stored ? null : result.NotStoredReason,
         previousSweep = result.Previous?.Number,
         newOnly = request.NewOnly,
-        newFindings = result.NewKeys.Count(k => result.Report.Findings.Any(f => f.Key == k)),
+        newFindings = result.Report.Findings.Count(f => result.NewKeys.Contains(f.Key)),
         newFindingKeys = result.Report.Findings.Where(f => result.NewKeys.Contains(f.Key)).Select(f => f.Key),
         photosWithoutSku = result.PhotosWithoutSku,
         photosWithoutNode = result.PhotosWithoutNode,

@@ -23,6 +23,7 @@ internal static class Program
             "kernel" => KernelBench.Run(),
             "params" => ParameterSweep.Run(quick),
             "crash-test" => CrashTest.Run(args),
+            "sweep" => SweepBench.Run(quick),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
             _ => Usage(),
         };
