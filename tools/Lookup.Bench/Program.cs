@@ -27,6 +27,8 @@ internal static class Program
             "persisted" => PersistedBench.Reopen(),
             "crash-test" => CrashTest.Run(args),
             "merge" => MergeBench.Run(args),
+
+            "sweep" => SweepBench.Run(quick),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
             _ => Usage(),
         };
@@ -42,7 +44,7 @@ internal static class Program
 
     private static int Usage()
     {
-        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | prepare | extract-fashion-mnist [--count N]");
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | sweep [--quick] | prepare | extract-fashion-mnist [--count N]");
         return 2;
     }
 }

@@ -101,7 +101,8 @@ internal static class SkuOutliers
             evidence);
     }
 
-    private static float Distance(SweepPhoto a, SweepPhoto b) => 1f - TensorPrimitives.Dot(a.Embedding.Span, b.Embedding.Span);
+    // Clamped: for identical photos 1 − dot can round to just below 0, which a verdict would print as "-0.000".
+    private static float Distance(SweepPhoto a, SweepPhoto b) => Math.Max(0f, 1f - TensorPrimitives.Dot(a.Embedding.Span, b.Embedding.Span));
 
     private static float[] NearestOwn(IReadOnlyList<SweepPhoto> photos, int[] members)
     {

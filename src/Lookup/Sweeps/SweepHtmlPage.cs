@@ -15,11 +15,12 @@ internal static class SweepHtmlPage
         .filters label{margin-right:1em}
         section.finding{border:1px solid #ccc;border-radius:6px;padding:.8em;margin:1em 0}
         .photos{display:flex;flex-wrap:wrap;gap:.8em}
-        figure{margin:0;width:220px}
-        figure img,.nopreview{width:220px;height:220px;object-fit:contain;background:#f3f3f3;border:1px solid #ddd}
+        figure{margin:0;width:180px}
+        figure img,.nopreview{width:180px;height:180px;object-fit:contain;background:#f3f3f3;border:1px solid #ddd}
         .nopreview{display:flex;align-items:center;justify-content:center;color:#888}
         figcaption{font-size:12px;word-break:break-all}
-        .role{color:#b00}.muted{color:#777}
+        .role{color:#b00}.muted{color:#777}.caption{color:#444}
+        .new{font-size:.75em;background:#b00;color:#fff;border-radius:3px;padding:0 .4em;vertical-align:middle}
         """;
 
     /// <summary>Shows or hides the findings of a kind when its box is ticked or cleared.</summary>

@@ -17,8 +17,16 @@ public static class SweepHtmlWriter
     /// <param name="previews">JPEG previews of photos; without it each photo shows a "no preview" box.</param>
     /// <param name="maxFindings">Findings shown; the rest are counted (the CSV and JSON hold all).</param>
     /// <param name="maxPairsPerFinding">Pairs listed per finding; the rest are counted.</param>
+    /// <param name="caption">A line under the title (e.g. which index and catalogue root); escaped.</param>
+    /// <param name="newKeys">Keys of findings to mark as new since the previous sweep; null marks none.</param>
     public static void Write(
-        SweepReport report, TextWriter writer, ReportThumbnailSource? previews = null, int maxFindings = 2000, int maxPairsPerFinding = 50)
+        SweepReport report,
+        TextWriter writer,
+        ReportThumbnailSource? previews = null,
+        int maxFindings = 2000,
+        int maxPairsPerFinding = 50,
+        string? caption = null,
+        IReadOnlySet<string>? newKeys = null)
     {
         ArgumentNullException.ThrowIfNull(report);
         ArgumentNullException.ThrowIfNull(writer);
@@ -29,11 +37,16 @@ public static class SweepHtmlWriter
         writer.Write($"<meta http-equiv=\"Content-Security-Policy\" content=\"{SweepHtmlPage.ContentSecurityPolicy}\">");
         writer.Write($"<title>Catalogue sweep {Time(report.StartedAt)}</title><style>{SweepHtmlPage.Style}</style></head><body>\n");
         writer.Write($"<h1>Catalogue sweep, {Time(report.StartedAt)}</h1>\n");
+        if (caption is not null)
+        {
+            writer.Write($"<p class=\"caption\">{E(caption)}</p>\n");
+        }
+
         writer.Write($"<p class=\"notice\">{E(report.Notice)}</p>\n");
         WriteSummary(report, writer);
         for (var f = 0; f < Math.Min(report.Findings.Count, maxFindings); f++)
         {
-            WriteFinding(report.Findings[f], f + 1, writer, previews, images, maxPairsPerFinding);
+            WriteFinding(report.Findings[f], f + 1, writer, previews, images, maxPairsPerFinding, newKeys);
         }
 
         if (report.Findings.Count > maxFindings)
@@ -41,6 +54,7 @@ public static class SweepHtmlWriter
             writer.Write($"<p class=\"muted\">{report.Findings.Count - maxFindings} more findings are in the CSV and JSON reports.</p>\n");
         }
 
+        writer.Write($"<p class=\"notice\">{E(report.Notice)}</p>\n");
         writer.Write($"<script>{SweepHtmlPage.Script}</script>\n</body></html>\n");
     }
 
@@ -68,10 +82,17 @@ public static class SweepHtmlWriter
     }
 
     private static void WriteFinding(
-        SweepFinding finding, int number, TextWriter writer, ReportThumbnailSource? previews, Dictionary<int, string?> images, int maxPairs)
+        SweepFinding finding,
+        int number,
+        TextWriter writer,
+        ReportThumbnailSource? previews,
+        Dictionary<int, string?> images,
+        int maxPairs,
+        IReadOnlySet<string>? newKeys)
     {
+        var badge = newKeys?.Contains(finding.Key) == true ? " <span class=\"new\">new</span>" : "";
         writer.Write($"<section class=\"finding\" data-kind=\"{FindingKindText.Code(finding.Kind)}\" id=\"f{number}\">");
-        writer.Write($"<h2>{number}. {E(FindingKindText.Label(finding.Kind))}</h2><p>{E(finding.Verdict)}</p><div class=\"photos\">");
+        writer.Write($"<h2>{number}. {E(FindingKindText.Label(finding.Kind))}{badge}</h2><p>{E(finding.Verdict)}</p><div class=\"photos\">");
         foreach (var member in finding.Members)
         {
             WriteFigure(member, writer, previews, images);
