@@ -13,8 +13,14 @@ namespace Lookup.Catalogue;
 /// limits, take the dHash and grey thumbnail, embed. A bad photo becomes a failed record, never an exception.
 /// Thread safety: safe to call from many threads (the decoder and embedder are shared and thread-safe).
 /// </summary>
-internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, TimeProvider clock)
+/// <param name="decoder">Decodes within the run's limits (shared, thread-safe).</param>
+/// <param name="embedder">The run's model (shared, thread-safe).</param>
+/// <param name="clock">Stamps the records.</param>
+/// <param name="readFile">Reads a photo's bytes (default <see cref="File.ReadAllBytes(string)"/>); tests replace it.</param>
+internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, TimeProvider clock, Func<string, byte[]>? readFile = null)
 {
+    private readonly Func<string, byte[]> _readFile = readFile ?? File.ReadAllBytes;
+
     public PhotoOutcome Process(PhotoJob job)
     {
         var entry = job.Current.Entry;
@@ -30,7 +36,9 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
         };
         if (!entry.IsImage)
         {
-            return Failed(job, record, "NotAnImage", entry.ContentProblem ?? $"{entry.FullPath}: not an image file.");
+            // The decoder's reason names, so the index uses one vocabulary whichever step refused the file.
+            string reason = entry.Size == 0 ? nameof(PhotoRejectionReason.EmptyFile) : nameof(PhotoRejectionReason.UnknownFormat);
+            return Failed(job, record, reason, $"{entry.FullPath}: {entry.ContentProblem ?? "not an image file"}.");
         }
 
         try
@@ -41,7 +49,7 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
                     $"{entry.FullPath}: {entry.Size:N0} bytes is over the {decoder.Limits.MaxFileBytes:N0}-byte limit; shrink the file or raise the limit.");
             }
 
-            byte[] bytes = File.ReadAllBytes(entry.FullPath);
+            byte[] bytes = _readFile(entry.FullPath);
             string sha = job.Sha256 ?? Convert.ToHexStringLower(SHA256.HashData(bytes));
             record = record with { Sha256 = sha, Size = bytes.Length };
             using var photo = decoder.Decode(bytes, entry.FullPath);
@@ -63,7 +71,10 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            return Failed(job, record, "Unreadable", $"{entry.FullPath}: could not be read ({e.Message}); check that the file exists and is readable.");
+            // Size, time and hash are cleared so the next run sees the file as changed and reads it again: a
+            // read error says nothing about the content, unlike a decode failure, which is kept until the file changes.
+            return Failed(job, record with { Size = 0, MtimeUtcTicks = 0, Sha256 = null }, nameof(PhotoRejectionReason.Unreadable),
+                $"{entry.FullPath}: could not be read ({e.Message}); check that the file exists and is readable, then run ingest again.");
         }
     }
 
