@@ -1,4 +1,5 @@
 using Lookup.Catalogue;
+using Lookup.Imaging;
 using Lookup.Store;
 using Lookup.Tests.Embedding;
 
@@ -108,6 +109,28 @@ public sealed class CatalogueIngestFailureTests(EmbedderFixture fixture) : IDisp
 
         Assert.Equal((1, 1, 0), (next.Changed, next.Embedded, next.Failed));
         Assert.Equal(PhotoStatus.Indexed, IndexSnapshot.Read(tree.IndexPath).Records["BR-2/d.png"].Status);
+    }
+
+    [Fact]
+    public void A_photo_refused_by_a_limit_stays_failed_until_retried_and_is_then_indexed()
+    {
+        Fill();
+        var strict = EngineIngest.Options(tree) with { Limits = PhotoLimits.Default with { MaxPixels = 200_000 } };
+        var first = EngineIngest.Run(tree, fixture.Embedder, strict);
+
+        // apple.jpg and baboon.jpg are 512 × 512 (262,144 pixels), fruits.jpg 512 × 480, smarties.png 413 × 356.
+        Assert.Equal(["BR-1/a.jpg", "BR-1/b.jpg", "BR-2/c.jpg"], first.Failures.Select(f => f.Path).Order(StringComparer.Ordinal));
+        Assert.All(first.Failures, f => Assert.Equal("TooManyPixels", f.Reason));
+
+        var unchanged = EngineIngest.Run(tree, fixture.Embedder);
+        var retried = EngineIngest.Run(tree, fixture.Embedder, EngineIngest.Options(tree) with { RetryFailed = true });
+        var index = IndexSnapshot.Read(tree.IndexPath);
+
+        Assert.Equal((0, 4), (unchanged.Embedded, unchanged.Unchanged));
+        Assert.Equal((3, 0), (retried.Embedded, retried.Failed));
+        Assert.Empty(index.Failed);
+        var (found, _) = index.Nearest(fixture.EmbedBytes(IngestTree.Bytes("opencv/baboon.jpg"), "baboon"));
+        Assert.Equal(("BR-1/b.jpg", "BR-1"), (found?.Path, found?.Sku));
     }
 
     public void Dispose() => tree.Dispose();
