@@ -12,6 +12,7 @@ namespace Lookup.Cli;
 internal static class IngestCommand
 {
     private const int FailuresShown = 20;
+    private const int DefaultBatchSize = 64;
 
     private static readonly JsonSerializerOptions Json = new()
     {
@@ -42,6 +43,11 @@ internal static class IngestCommand
             DefaultValueFactory = _ => PhotoLimits.Default.MaxPixels / 1e6,
         };
         var shard = new Option<string?>("--shard") { Description = "Process only shard K of N (K/N, 1-based), chosen by a hash of each photo's relative path." };
+        var batchSize = new Option<int>("--batch-size")
+        {
+            Description = "Photos committed to the index per transaction; a stop or crash loses at most the batch in progress.",
+            DefaultValueFactory = _ => DefaultBatchSize,
+        };
         var json = new Option<bool>("--json") { Description = "Print the summary as JSON on stdout." };
         var quiet = new Option<bool>("--quiet") { Description = "No progress on stderr." };
         var model = ModelOption.Create();
@@ -55,11 +61,11 @@ internal static class IngestCommand
               lookup ingest /srv/photos --index parts.lookup
               lookup ingest /srv/photos --index parts.lookup --sku-from csv:/srv/photos/skus.csv --json
 
-            Exit codes: 0 all photos indexed, 1 some photos failed (listed) or the index could not be used,
-            2 usage error, 130 stopped by Ctrl+C (what was done is kept).
+            Exit codes: 0 all photos indexed, 1 some photos failed or got no SKU (listed) or the index could not
+            be used, 2 usage error, 130 stopped by Ctrl+C or SIGTERM (what was done is kept; run again to finish).
             """)
         {
-            tree, index, skuFrom, workers, keepMissing, retryFailed, maxMegapixels, shard, json, quiet, model,
+            tree, index, skuFrom, workers, keepMissing, retryFailed, maxMegapixels, shard, batchSize, json, quiet, model,
         };
         command.SetAction((parseResult, cancellationToken) => Task.FromResult(Run(
             new IngestRequest(
@@ -71,6 +77,7 @@ internal static class IngestCommand
                 parseResult.GetValue(retryFailed),
                 parseResult.GetValue(maxMegapixels),
                 parseResult.GetValue(shard),
+                parseResult.GetValue(batchSize),
                 parseResult.GetValue(json),
                 parseResult.GetValue(quiet),
                 parseResult.GetValue(model)),
@@ -82,9 +89,9 @@ internal static class IngestCommand
 
     internal static int Run(IngestRequest request, TextWriter output, TextWriter error, CancellationToken cancellationToken)
     {
-        if (request.Workers < 1 || request.MaxMegapixels <= 0)
+        if (request.Workers < 1 || request.MaxMegapixels <= 0 || request.BatchSize < 1)
         {
-            error.WriteLine("lookup ingest: --workers must be at least 1 and --max-megapixels above 0.");
+            error.WriteLine("lookup ingest: --workers and --batch-size must be at least 1 and --max-megapixels above 0.");
             return ExitCodes.Usage;
         }
 
@@ -108,6 +115,13 @@ internal static class IngestCommand
             return ExitCodes.Usage;
         }
 
+        // Checked before the model loads and the index is created: a mistyped spec or CSV path costs nothing.
+        if (!SkuMapping.TryParse(request.SkuFrom, Environment.CurrentDirectory, out _, out string? mappingError))
+        {
+            error.WriteLine($"lookup ingest: --sku-from: {mappingError}");
+            return ExitCodes.Usage;
+        }
+
         using var embedder = ModelOption.TryLoad(request.Model, "ingest", error);
         if (embedder is null)
         {
@@ -123,20 +137,28 @@ internal static class IngestCommand
             RetryFailed = request.RetryFailed,
             Limits = PhotoLimits.Default with { MaxPixels = (long)(request.MaxMegapixels * 1e6) },
             Shard = shard,
+            BatchSize = request.BatchSize,
         };
         var progressLine = new ProgressLine(error, request.Quiet);
         IngestSummary summary;
+        using var stop = new StopSignal(cancellationToken);
         try
         {
             using var file = IndexFile.Open(request.Index, IndexAccess.Write);
             var progress = new SynchronousProgress<IngestProgress>(p => progressLine.Report(p.Stage, p.Done, p.Total, p.Failed, p.Total > 0 && p.Done == p.Total));
-            summary = new CatalogueIngest(file, embedder).Run(options, progress, cancellationToken);
+            summary = new CatalogueIngest(file, embedder).Run(options, progress, stop.Token);
         }
         catch (Exception e) when (e is IndexFileException or SkuMappingException)
         {
             progressLine.Finish();
             error.WriteLine($"lookup ingest: {e.Message}");
             return ExitCodes.Failures;
+        }
+        catch (OperationCanceledException) when (stop.Token.IsCancellationRequested)
+        {
+            progressLine.Finish();
+            error.WriteLine($"lookup ingest: stopped while scanning and planning, before any photo was embedded; {request.Index} is as it was. Run the same command again.");
+            return ExitCodes.Interrupted;
         }
 
         progressLine.Finish();
@@ -149,7 +171,9 @@ internal static class IngestCommand
             WriteText(summary, request, output);
         }
 
-        return summary.Cancelled ? ExitCodes.Interrupted : summary.Failed > 0 ? ExitCodes.Failures : ExitCodes.Success;
+        return summary.Cancelled ? ExitCodes.Interrupted
+            : summary.Failed > 0 || summary.MappingProblems.Any(p => p.Severity == ProblemSeverity.Error) ? ExitCodes.Failures
+            : ExitCodes.Success;
     }
 
     private static void WriteText(IngestSummary s, IngestRequest request, TextWriter output)

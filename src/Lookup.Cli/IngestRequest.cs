@@ -10,6 +10,7 @@ internal sealed record IngestRequest(
     bool RetryFailed,
     double MaxMegapixels,
     string? Shard,
+    int BatchSize,
     bool Json,
     bool Quiet,
     string? Model);

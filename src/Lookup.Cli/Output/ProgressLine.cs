@@ -16,7 +16,7 @@ internal sealed class ProgressLine
     private readonly bool _quiet;
     private readonly bool _terminal;
     private readonly Stopwatch _clock = Stopwatch.StartNew();
-    private TimeSpan _lastDrawn = TimeSpan.MinValue;
+    private TimeSpan? _lastDrawn;
     private int _lastWidth;
 
     public ProgressLine(TextWriter error, bool quiet)
@@ -37,8 +37,8 @@ internal sealed class ProgressLine
         }
 
         TimeSpan now = _clock.Elapsed;
-        // The first report always draws (now − MinValue would overflow).
-        if (!force && _lastDrawn != TimeSpan.MinValue && now - _lastDrawn < (_terminal ? TerminalInterval : LogInterval))
+        // Nullable rather than TimeSpan.MinValue: now − MinValue overflows and threw on the first report.
+        if (!force && _lastDrawn is { } last && now - last < (_terminal ? TerminalInterval : LogInterval))
         {
             return;
         }

@@ -21,6 +21,12 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
 {
     private readonly TimeProvider _clock = clock ?? TimeProvider.System;
 
+    /// <summary>The file-system calls of the scan; tests replace them to refuse access at an exact path.</summary>
+    internal ScanIo ScanIo { get; init; } = ScanIo.Default;
+
+    /// <summary>How a worker reads a photo's bytes; tests replace it to make a file vanish or refuse access mid-run.</summary>
+    internal Func<string, byte[]> ReadFile { get; init; } = File.ReadAllBytes;
+
     /// <summary>Runs one ingest. Cancellation stops dispatching photos, commits what was done and returns a
     /// summary with <see cref="IngestSummary.Cancelled"/> set.</summary>
     /// <exception cref="IndexFileException">The index was built with another model.</exception>
@@ -32,7 +38,7 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
         string root = Path.GetFullPath(options.Root);
         var mapping = SkuMapping.Parse(options.SkuMapping, Environment.CurrentDirectory);
         progress?.Report(new IngestProgress("scanning", 0, 0, 0));
-        var scan = new CatalogueScanner().Scan(root, cancellationToken);
+        var scan = new CatalogueScanner(ScanOptions.Default, ScanIo).Scan(root, cancellationToken);
         var mapped = mapping.Map(scan.Entries);
         var inShard = mapped.Photos.Where(p => options.Shard?.Contains(p.Entry.RelativePath) ?? true).ToList();
 
@@ -53,12 +59,17 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
                 ApplyCheapChange(item, photos, graph, jobs, summary, options);
             }
 
+            foreach (var problem in scan.Problems.Where(p => IsUnreadablePhoto(p, options)))
+            {
+                RecordUnreadable(problem.RelativePath, problem.Kind.ToString(), problem.Message, photos, summary);
+            }
+
             graphStore.Commit(graph);
         });
 
         var failures = new List<IngestFailure>();
         var embeddingClock = Stopwatch.StartNew();
-        var worker = new PhotoWorker(new PhotoDecoder(options.Limits), embedder, _clock);
+        var worker = new PhotoWorker(new PhotoDecoder(options.Limits), embedder, _clock, ReadFile);
         int done = 0;
         bool cancelled = false;
         progress?.Report(new IngestProgress("embedding", 0, jobs.Count, 0));
@@ -136,7 +147,7 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
         switch (item.Kind)
         {
             case ChangeKind.Unchanged when options.RetryFailed && known?.Status == KnownPhotoStatus.Failed && item.Current is not null:
-                jobs.Add(new PhotoJob(item.Current, null, null));
+                jobs.Add(new PhotoJob(WithPlannedSku(item), null, null));
                 tally.Changed++;
                 break;
             case ChangeKind.Unchanged:
@@ -166,7 +177,7 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
                 tally.Moved++;
                 break;
             case ChangeKind.Changed:
-                jobs.Add(new PhotoJob(item.Current!, item.Sha256, ToNode(known)));
+                jobs.Add(new PhotoJob(WithPlannedSku(item), item.Sha256, ToNode(known)));
                 tally.Changed++;
                 break;
             case ChangeKind.New when item.Current!.Sku is null:
@@ -184,14 +195,50 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
             case ChangeKind.Missing or ChangeKind.Unverified:
                 tally.KeptMissing++;
                 break;
-            case ChangeKind.HashFailed when known is null:
-                tally.FailedBeforeEmbedding.Add(new IngestFailure(item.RelativePath, "Unreadable", item.Error ?? "could not be read"));
-                break;
             case ChangeKind.HashFailed:
-                tally.KeptMissing++;
+                RecordUnreadable(item.RelativePath, "Unreadable", item.Error ?? $"{item.RelativePath} could not be read.", photos, tally);
                 break;
         }
     }
+
+    /// <summary>
+    /// A file with a photo's name that the scan could not open (permission denied, I/O error) never becomes a scan
+    /// entry, so the planner cannot see it; it is still a photo that failed.
+    /// </summary>
+    private static bool IsUnreadablePhoto(ScanProblem problem, IngestOptions options) =>
+        problem.Kind is ScanProblemKind.AccessDenied or ScanProblemKind.ReadError
+        && ImageSignature.HasImageExtension(problem.FullPath)
+        && File.Exists(problem.FullPath)
+        && (options.Shard?.Contains(problem.RelativePath) ?? true);
+
+    /// <summary>
+    /// Records a photo that could not be read. An indexed photo keeps its record and node (the last good version
+    /// stays searchable) and the failure is only reported; otherwise a failed record is written with size and time
+    /// zero, so the next run sees the file as changed and tries again once it can be read.
+    /// </summary>
+    private void RecordUnreadable(string path, string reason, string message, PhotoTable photos, Tally tally)
+    {
+        var known = photos.Find(path);
+        if (known is { Status: PhotoStatus.Indexed })
+        {
+            tally.FailedBeforeEmbedding.Add(new IngestFailure(path, reason, message + " The version indexed before is kept."));
+            return;
+        }
+
+        photos.Upsert(new PhotoRecord
+        {
+            Path = path,
+            Sku = known?.Sku,
+            Status = PhotoStatus.Failed,
+            FailureReason = reason,
+            FailureMessage = message,
+            UpdatedUtc = Now(),
+        });
+        tally.FailedBeforeEmbedding.Add(new IngestFailure(path, reason, message));
+    }
+
+    /// <summary>The scanned entry with the SKU the plan settled on: an unmapped photo keeps the SKU it was known by.</summary>
+    private static MappedEntry WithPlannedSku(PlannedChange item) => item.Current! with { Sku = item.Sku };
 
     private void Store(PhotoOutcome outcome, PhotoTable photos, HnswGraph graph, List<IngestFailure> failures)
     {

@@ -5,6 +5,7 @@ using Lookup.Store;
 using Lookup.Sweeps;
 using SixLabors.ImageSharp;
 using SixLabors.ImageSharp.PixelFormats;
+using SixLabors.ImageSharp.Processing;
 
 namespace Lookup.Catalogue;
 
@@ -13,8 +14,17 @@ namespace Lookup.Catalogue;
 /// limits, take the dHash and grey thumbnail, embed. A bad photo becomes a failed record, never an exception.
 /// Thread safety: safe to call from many threads (the decoder and embedder are shared and thread-safe).
 /// </summary>
-internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, TimeProvider clock)
+/// <param name="decoder">Decodes within the run's limits (shared, thread-safe).</param>
+/// <param name="embedder">The run's model (shared, thread-safe).</param>
+/// <param name="clock">Stamps the records.</param>
+/// <param name="readFile">Reads a photo's bytes (default <see cref="File.ReadAllBytes(string)"/>); tests replace it.</param>
+internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, TimeProvider clock, Func<string, byte[]>? readFile = null)
 {
+    /// <summary>Longest side a photo keeps before its thumbnail is taken (16 source pixels per thumbnail pixel).</summary>
+    internal const int ThumbnailSourceSide = 512;
+
+    private readonly Func<string, byte[]> _readFile = readFile ?? File.ReadAllBytes;
+
     public PhotoOutcome Process(PhotoJob job)
     {
         var entry = job.Current.Entry;
@@ -30,7 +40,9 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
         };
         if (!entry.IsImage)
         {
-            return Failed(job, record, "NotAnImage", entry.ContentProblem ?? $"{entry.FullPath}: not an image file.");
+            // The decoder's reason names, so the index uses one vocabulary whichever step refused the file.
+            string reason = entry.Size == 0 ? nameof(PhotoRejectionReason.EmptyFile) : nameof(PhotoRejectionReason.UnknownFormat);
+            return Failed(job, record, reason, $"{entry.FullPath}: {entry.ContentProblem ?? "not an image file"}.");
         }
 
         try
@@ -41,7 +53,7 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
                     $"{entry.FullPath}: {entry.Size:N0} bytes is over the {decoder.Limits.MaxFileBytes:N0}-byte limit; shrink the file or raise the limit.");
             }
 
-            byte[] bytes = File.ReadAllBytes(entry.FullPath);
+            byte[] bytes = _readFile(entry.FullPath);
             string sha = job.Sha256 ?? Convert.ToHexStringLower(SHA256.HashData(bytes));
             record = record with { Sha256 = sha, Size = bytes.Length };
             using var photo = decoder.Decode(bytes, entry.FullPath);
@@ -63,15 +75,37 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            return Failed(job, record, "Unreadable", $"{entry.FullPath}: could not be read ({e.Message}); check that the file exists and is readable.");
+            // Size, time and hash are cleared so the next run sees the file as changed and reads it again: a
+            // read error says nothing about the content, unlike a decode failure, which is kept until the file changes.
+            return Failed(job, record with { Size = 0, MtimeUtcTicks = 0, Sha256 = null }, nameof(PhotoRejectionReason.Unreadable),
+                $"{entry.FullPath}: could not be read ({e.Message}); check that the file exists and is readable, then run ingest again.");
         }
     }
 
     private static PhotoOutcome Failed(PhotoJob job, PhotoRecord record, string reason, string message) =>
         new(job, record with { Status = PhotoStatus.Failed, FailureReason = reason, FailureMessage = message }, null);
 
-    /// <summary>The sweep's 32 × 32 grey thumbnail of the whole photo.</summary>
+    /// <summary>
+    /// The sweep's 32 × 32 grey thumbnail of the whole photo. Photos larger than <see cref="ThumbnailSourceSide"/>
+    /// on a side are first shrunk with a box filter so the longer side is that long: the grey copy of a 12 MP photo
+    /// cost 2 × 12 MB of allocations and more time than its inference (Lookup.Bench ingest), and an area average
+    /// of a box-filtered image differs from the full-size one by rounding only (PhotoWorkerTests).
+    /// </summary>
     internal static byte[] Thumbnail(Image<Rgb24> image)
+    {
+        if (image.Width <= ThumbnailSourceSide && image.Height <= ThumbnailSourceSide)
+        {
+            return GreyThumbnailOf(image);
+        }
+
+        double scale = (double)ThumbnailSourceSide / Math.Max(image.Width, image.Height);
+        int width = Math.Max((int)Math.Round(image.Width * scale), Math.Min(image.Width, GreyThumbnail.Side));
+        int height = Math.Max((int)Math.Round(image.Height * scale), Math.Min(image.Height, GreyThumbnail.Side));
+        using var shrunk = image.Clone(x => x.Resize(width, height, KnownResamplers.Box));
+        return GreyThumbnailOf(shrunk);
+    }
+
+    private static byte[] GreyThumbnailOf(Image<Rgb24> image)
     {
         using var grey = image.CloneAs<L8>();
         byte[] pixels = new byte[image.Width * image.Height];
