@@ -42,7 +42,6 @@ done
 [[ "$shards" =~ ^[1-9][0-9]*$ ]] || die "--shards must be a whole number ≥ 1, not '$shards'"
 [[ "$cpus" =~ ^[1-9][0-9]*$ ]] || die "--cpus must be a whole number ≥ 1, not '$cpus'"
 [ -d "$tree" ] || die "$tree is not a folder"
-command -v sbatch >/dev/null || die "sbatch not found: run this on a Slurm login node"
 
 tree="$(cd "$tree" && pwd)"
 index="$(realpath -m "$index")"
@@ -53,6 +52,7 @@ if [ -n "$only" ]; then
   for k in ${only//,/ }; do [ "$k" -ge 1 ] && [ "$k" -le "$shards" ] || die "shard $k is not between 1 and $shards"; done
   array_spec="$only"
 fi
+command -v sbatch >/dev/null || die "sbatch not found: run this on a Slurm login node"
 mkdir -p "$parts/logs"
 
 # Passed through the environment (--export=ALL), not --export=NAME=VALUE, so values may hold commas.
