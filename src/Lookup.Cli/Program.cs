@@ -20,6 +20,7 @@ internal static class Program
         var root = new RootCommand("Lookup: identify parts from photos against a catalogue and keep the catalogue free of duplicates.");
         root.Subcommands.Add(InspectCommand.Create());
         root.Subcommands.Add(IngestCommand.Create());
+        root.Subcommands.Add(MatchCommand.Create());
         return root;
     }
 }
