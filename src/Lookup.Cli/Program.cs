@@ -25,6 +25,7 @@ internal static class Program
         root.Subcommands.Add(MergeCommand.Create());
         root.Subcommands.Add(SweepCommand.Create());
         root.Subcommands.Add(DismissCommand.Create());
+        root.Subcommands.Add(MatchCommand.Create());
         return root;
     }
 }
