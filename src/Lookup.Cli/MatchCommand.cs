@@ -10,7 +10,7 @@ namespace Lookup.Cli;
 internal static class MatchCommand
 {
     /// <summary>The crop set used when --crops is not given (measured in DEVELOPERS.md, section Matching).</summary>
-    internal const CropSet DefaultCrops = CropSet.Standard;
+    internal const CropSet DefaultCrops = CropSet.Dense;
 
     private const int MaxTop = 100;
 

@@ -37,10 +37,14 @@ internal sealed class Cli(string dll)
         }
     }
 
-    /// <summary>Each query ranked alone (--each), every SKU the searches meet listed.</summary>
-    public (Dictionary<string, List<Ranked>> Rankings, TimeSpan Wall) MatchEach(string index, IReadOnlyList<Query> queries, string crops)
+    /// <summary>Each query ranked alone (--each), every SKU the searches meet listed; the JSON is kept in
+    /// <paramref name="cache"/> and read from there on later runs (delete it to measure again).</summary>
+    public (Dictionary<string, List<Ranked>> Rankings, TimeSpan Wall) MatchEach(string index, IReadOnlyList<Query> queries, string crops, string cache)
     {
-        var (json, wall) = Run(["match", .. queries.Select(q => q.File), "--index", index, "--each", "--json", "--top", "100", "--crops", crops]);
+        var (json, wall) = File.Exists(cache)
+            ? (File.ReadAllText(cache), TimeSpan.Zero)
+            : Run(["match", .. queries.Select(q => q.File), "--index", index, "--each", "--json", "--top", "100", "--crops", crops]);
+        File.WriteAllText(cache, json);
         using var doc = JsonDocument.Parse(json);
         var rankings = new Dictionary<string, List<Ranked>>(StringComparer.Ordinal);
         foreach (var answer in doc.RootElement.GetProperty("answers").EnumerateArray())

@@ -11,8 +11,8 @@ namespace MatchBench;
 /// </summary>
 internal static class Evaluation
 {
-    private static readonly float[] SamePartGrid = [0.20f, 0.25f, 0.30f, 0.35f, 0.40f];
-    private static readonly float[] MarginGrid = [0f, 0.02f, 0.05f, 0.10f, 0.15f];
+    private static readonly float[] SamePartGrid = [0.20f, 0.22f, 0.24f, 0.25f, 0.26f, 0.28f, 0.30f, 0.35f, 0.40f];
+    private static readonly float[] MarginGrid = [0f, 0.05f, 0.10f, 0.15f];
 
     public static int Run(Arguments args)
     {
@@ -20,7 +20,7 @@ internal static class Evaluation
         string work = Path.GetFullPath(args.Get("work"));
         string demo = Path.GetFullPath(args.Get("demo", "demo-catalogue"));
         var crops = args.Get("crops", "none,standard,dense").Split(',');
-        string tradeOffCrops = args.Get("tradeoff-crops", crops.Contains("standard") ? "standard" : crops[0]);
+        var tradeOffCrops = args.Get("tradeoff-crops", string.Join(',', crops.Where(c => c != "none"))).Split(',');
         Directory.CreateDirectory(work);
 
         var demoQueries = QuerySets.Demo(demo);
@@ -38,8 +38,8 @@ internal static class Evaluation
         Console.WriteLine("| --- | --- | --- | ---: | ---: | ---: |");
         foreach (var mode in crops)
         {
-            var (demoRankings, demoWall) = cli.MatchEach(demoIndex, demoQueries, mode);
-            var (refRankings, refWall) = cli.MatchEach(refIndex, refQueries, mode);
+            var (demoRankings, demoWall) = cli.MatchEach(demoIndex, demoQueries, mode, Path.Combine(work, $"demo-{mode}.json"));
+            var (refRankings, refWall) = cli.MatchEach(refIndex, refQueries, mode, Path.Combine(work, $"ref-{mode}.json"));
             var rankings = demoRankings.Concat(refRankings).ToDictionary(kv => kv.Key, kv => kv.Value, StringComparer.Ordinal);
             results[mode] = rankings;
             foreach (var set in all.Select(q => q.Set).Distinct())
@@ -53,14 +53,17 @@ internal static class Evaluation
             }
         }
 
-        foreach (var (name, queries) in new[]
+        foreach (var mode in tradeOffCrops)
         {
-            ("demo field photos", demoQueries),
-            ("reference photos, whole", refQueries.Where(q => q.Set is QuerySets.RefPartners or QuerySets.RefEdits or QuerySets.RefHeldOut).ToList()),
-            ("reference snapshots", refQueries.Where(q => q.Group is not null).ToList()),
-        })
-        {
-            TradeOff(name, tradeOffCrops, queries, results[tradeOffCrops]);
+            foreach (var (name, queries) in new[]
+            {
+                ("demo field photos", demoQueries),
+                ("reference photos, whole", refQueries.Where(q => q.Set is QuerySets.RefPartners or QuerySets.RefEdits or QuerySets.RefHeldOut).ToList()),
+                ("reference snapshots", refQueries.Where(q => q.Group is not null).ToList()),
+            })
+            {
+                TradeOff(name, mode, queries, results[mode]);
+            }
         }
 
         foreach (var mode in crops)
@@ -82,14 +85,14 @@ internal static class Evaluation
         Console.WriteLine();
         Console.WriteLine($"Trade-off, {name} ({known.Count} stocked, {unknown.Count} not stocked; crops {crops}):");
         Console.WriteLine();
-        Console.WriteLine("| same part ≤ | margin ≥ | stocked: right and sure | right but unsure | wrong and sure | not stocked: no match | unsure | wrong and sure |");
-        Console.WriteLine("| ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
+        Console.WriteLine("| same part ≤ | margin ≥ | stocked: right and sure | unsure, right SKU listed | wrong and sure | no match | not stocked: no match | unsure | wrong and sure |");
+        Console.WriteLine("| ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
         foreach (var samePart in SamePartGrid)
         {
             foreach (var margin in MarginGrid)
             {
                 var t = VerdictThresholds.Default with { SamePart = samePart, MinMargin = margin };
-                int rightSure = 0, rightUnsure = 0, wrongSure = 0, rejected = 0, unsure = 0, falseSure = 0;
+                int rightSure = 0, rightUnsure = 0, wrongSure = 0, missed = 0, rejected = 0, unsure = 0, falseSure = 0;
                 foreach (var q in queries)
                 {
                     var top = rankings[q.File][0];
@@ -98,9 +101,11 @@ internal static class Evaluation
                     if (q.Truth is not null)
                     {
                         bool right = top.Sku == q.Truth;
+                        bool listed = rankings[q.File].Take(5).Any(r => r.Sku == q.Truth && r.Distance <= samePart);
                         rightSure += right && sure ? 1 : 0;
-                        rightUnsure += right && verdict == Verdict.Unsure ? 1 : 0;
+                        rightUnsure += listed && verdict == Verdict.Unsure ? 1 : 0;
                         wrongSure += !right && sure ? 1 : 0;
+                        missed += verdict == Verdict.NoMatch ? 1 : 0;
                     }
                     else
                     {
@@ -110,7 +115,7 @@ internal static class Evaluation
                     }
                 }
 
-                Console.WriteLine(Invariant($"| {samePart:0.00} | {margin:0.00} | {Share(rightSure, known.Count)} | {Share(rightUnsure, known.Count)} | {Share(wrongSure, known.Count)} | {Share(rejected, unknown.Count)} | {Share(unsure, unknown.Count)} | {Share(falseSure, unknown.Count)} |"));
+                Console.WriteLine(Invariant($"| {samePart:0.00} | {margin:0.00} | {Share(rightSure, known.Count)} | {Share(rightUnsure, known.Count)} | {Share(wrongSure, known.Count)} | {Share(missed, known.Count)} | {Share(rejected, unknown.Count)} | {Share(unsure, unknown.Count)} | {Share(falseSure, unknown.Count)} |"));
             }
         }
 

@@ -27,22 +27,19 @@ internal sealed partial class SkuRanker(IMatchCatalogue catalogue, VerdictThresh
         ArgumentOutOfRangeException.ThrowIfZero(photos.Count);
         ArgumentOutOfRangeException.ThrowIfNegativeOrZero(top);
         exclude ??= Nothing;
-        var hits = SearchAll(photos, options.HitsPerCrop(top), exclude);
+        var hits = SearchAll(photos, options.HitsPerCrop(top), options.SkusScored(top), exclude);
         var identical = IdenticalFiles(photos, exclude);
-        var skus = hits.OrderBy(h => h.Value.Nearest).ThenBy(h => h.Key, StringComparer.Ordinal)
-            .Take(options.SkusScored(top))
-            .Select(h => h.Key)
-            .Union(identical.Keys, StringComparer.Ordinal)
-            .ToArray();
+        var skus = hits.Keys.Union(identical.Keys, StringComparer.Ordinal).ToArray();
         var scores = new SkuScore?[skus.Length];
         Parallel.For(0, skus.Length, Parallelism(), i =>
         {
             var sku = skus[i];
-            scores[i] = Score(sku, photos, hits.GetValueOrDefault(sku)?.Nodes, identical.GetValueOrDefault(sku), exclude);
+            scores[i] = Score(sku, photos, hits.GetValueOrDefault(sku), identical.GetValueOrDefault(sku), exclude);
         });
 
         var ranked = scores.OfType<SkuScore>()
             .OrderBy(s => s.Distance)
+            .ThenBy(s => s.IdenticalFile ? 0 : 1)
             .ThenBy(s => s.Sku, StringComparer.Ordinal)
             .ToList();
         return new MatchAnswer([.. photos.Select(p => p.Label)], [.. ranked.Take(top).Select((s, i) => ToRow(s, i, ranked))]);
@@ -56,8 +53,12 @@ internal sealed partial class SkuRanker(IMatchCatalogue catalogue, VerdictThresh
         return new SkuMatch(index + 1, score.Sku, score.Distance, score.WholePhotoDistance, margin, verdict, score.PhotosMatched, score.PhotosInSku, score.BestPhoto.Path);
     }
 
-    /// <summary>Every SKU among the nearest photos of every crop, with its nearest hit and the nodes found for it.</summary>
-    private Dictionary<string, SkuHits> SearchAll(IReadOnlyList<QueryPhoto> photos, int k, IReadOnlySet<int> exclude)
+    /// <summary>
+    /// The SKUs of the nearest photos over every crop, nearest first, until <paramref name="skus"/> SKUs are known:
+    /// photo records are looked up one by one (one index read each on a large catalogue), so nodes beyond those are
+    /// left alone; SKUs first met there could not rank among the ones scored.
+    /// </summary>
+    private Dictionary<string, HashSet<int>> SearchAll(IReadOnlyList<QueryPhoto> photos, int k, int skus, IReadOnlySet<int> exclude)
     {
         var vectors = photos.SelectMany(p => p.Crops).ToArray();
         var found = new ConcurrentDictionary<int, float>();
@@ -72,17 +73,22 @@ internal sealed partial class SkuRanker(IMatchCatalogue catalogue, VerdictThresh
             }
         });
 
-        var bySku = new Dictionary<string, SkuHits>(StringComparer.Ordinal);
-        foreach (var (node, distance) in found)
+        var bySku = new Dictionary<string, HashSet<int>>(StringComparer.Ordinal);
+        foreach (int node in found.OrderBy(f => f.Value).ThenBy(f => f.Key).Select(f => f.Key))
         {
             if (catalogue.PhotoAt(node) is { Sku: { } sku })
             {
-                if (!bySku.TryGetValue(sku, out var hits))
+                if (!bySku.TryGetValue(sku, out var nodes))
                 {
-                    bySku[sku] = hits = new SkuHits();
+                    if (bySku.Count == skus)
+                    {
+                        break;
+                    }
+
+                    bySku[sku] = nodes = [];
                 }
 
-                hits.Add(node, distance);
+                nodes.Add(node);
             }
         }
 

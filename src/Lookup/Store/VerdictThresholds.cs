@@ -33,11 +33,15 @@ public sealed record VerdictThresholds(
     private const string Id = "thresholds";
 
     /// <summary>
-    /// Defaults for ResNet18 until an index is calibrated. Measured on the reference photos
-    /// (tests/reference-data): planted copies (JPEG q30, 50 % crop, 25 % resize, brightness) sit at ≤ 0.215 from
-    /// their originals, unrelated photos at ≥ 0.419. Same-part and margin defaults are set by the match work.
+    /// Defaults for ResNet18 until an index is calibrated, measured with <c>tools/MatchBench eval</c> (DEVELOPERS.md,
+    /// section Matching; dense crops). Copy 0.22: Copydays-style copies of the reference photos (JPEG q30, 50 % crop,
+    /// 25 % resize, brightness) lie 0.003–0.215 from their originals. Same part 0.24: the largest distance at which
+    /// none of the held-out reference photos (nearest 0.246), their bench snapshots (nearest 0.262) or the demo's
+    /// unstocked field photos (nearest 0.333) is answered; it keeps 98 % of the whole-photo reference answers and
+    /// 20 % of the bench snapshots as sure answers (the rest come back as no match, none wrong). Margin 0.10: on the
+    /// demo's look-alike SKUs, 0.05 let two wrong answers through as sure and 0.10 one.
     /// </summary>
-    public static VerdictThresholds Default { get; } = new(Copy: 0.25f, SamePart: 0.40f, MinMargin: 0.05f, Source: "default");
+    public static VerdictThresholds Default { get; } = new(Copy: 0.22f, SamePart: 0.24f, MinMargin: 0.10f, Source: "default");
 
     /// <summary>The thresholds stored in <paramref name="file"/>, or <see cref="Default"/>.</summary>
     public static VerdictThresholds ReadOrDefault(IndexFile file)
