@@ -2,10 +2,8 @@ using System.Security.Cryptography;
 using Lookup.Embedding;
 using Lookup.Imaging;
 using Lookup.Store;
-using Lookup.Sweeps;
 using SixLabors.ImageSharp;
 using SixLabors.ImageSharp.PixelFormats;
-using SixLabors.ImageSharp.Processing;
 
 namespace Lookup.Catalogue;
 
@@ -20,9 +18,6 @@ namespace Lookup.Catalogue;
 /// <param name="readFile">Reads a photo's bytes (default <see cref="File.ReadAllBytes(string)"/>); tests replace it.</param>
 internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, TimeProvider clock, Func<string, byte[]>? readFile = null)
 {
-    /// <summary>Longest side a photo keeps before its thumbnail is taken (16 source pixels per thumbnail pixel).</summary>
-    internal const int ThumbnailSourceSide = 512;
-
     private readonly Func<string, byte[]> _readFile = readFile ?? File.ReadAllBytes;
 
     public PhotoOutcome Process(PhotoJob job)
@@ -85,31 +80,6 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
     private static PhotoOutcome Failed(PhotoJob job, PhotoRecord record, string reason, string message) =>
         new(job, record with { Status = PhotoStatus.Failed, FailureReason = reason, FailureMessage = message }, null);
 
-    /// <summary>
-    /// The sweep's 32 × 32 grey thumbnail of the whole photo. Photos larger than <see cref="ThumbnailSourceSide"/>
-    /// on a side are first shrunk with a box filter so the longer side is that long: the grey copy of a 12 MP photo
-    /// cost 2 × 12 MB of allocations and more time than its inference (Lookup.Bench ingest), and an area average
-    /// of a box-filtered image differs from the full-size one by rounding only (PhotoWorkerTests).
-    /// </summary>
-    internal static byte[] Thumbnail(Image<Rgb24> image)
-    {
-        if (image.Width <= ThumbnailSourceSide && image.Height <= ThumbnailSourceSide)
-        {
-            return GreyThumbnailOf(image);
-        }
-
-        double scale = (double)ThumbnailSourceSide / Math.Max(image.Width, image.Height);
-        int width = Math.Max((int)Math.Round(image.Width * scale), Math.Min(image.Width, GreyThumbnail.Side));
-        int height = Math.Max((int)Math.Round(image.Height * scale), Math.Min(image.Height, GreyThumbnail.Side));
-        using var shrunk = image.Clone(x => x.Resize(width, height, KnownResamplers.Box));
-        return GreyThumbnailOf(shrunk);
-    }
-
-    private static byte[] GreyThumbnailOf(Image<Rgb24> image)
-    {
-        using var grey = image.CloneAs<L8>();
-        byte[] pixels = new byte[image.Width * image.Height];
-        grey.CopyPixelDataTo(pixels);
-        return GreyThumbnail.FromGrey(pixels, image.Width, image.Height).Pixels.ToArray();
-    }
+    /// <summary>The sweep's 32 × 32 grey thumbnail of the whole photo (see <see cref="PhotoThumbnail"/>).</summary>
+    internal static byte[] Thumbnail(Image<Rgb24> image) => PhotoThumbnail.Of(image);
 }

@@ -43,7 +43,8 @@ public sealed class PhotoWorkerTests(EmbedderFixture fixture) : IDisposable
     [Theory]
     [InlineData("opencv/home.jpg")]
     [InlineData("skimage/chelsea.png")]
-    public void Thumbnail_of_a_photo_within_the_source_side_is_the_area_average_of_the_whole_photo(string reference)
+    [InlineData("opencv/graf1.png")]
+    public void Thumbnail_of_a_photo_under_twice_the_source_side_is_the_area_average_of_the_whole_photo(string reference)
     {
         using var image = Image.Load<Rgb24>(IngestTree.Reference(reference));
 
@@ -52,10 +53,10 @@ public sealed class PhotoWorkerTests(EmbedderFixture fixture) : IDisposable
 
     [Theory]
     [InlineData("opencv/aloeL.jpg", 1.0)]
-    [InlineData("opencv/graf1.png", 1.0)]
+    [InlineData("opencv/graf1.png", 2.0)]
     [InlineData("skimage/coffee.png", 4243 / 600.0)]
     [InlineData("opencv/baboon.jpg", 1732 / 512.0)]
-    public void Thumbnail_of_a_large_photo_is_taken_from_a_shrunk_copy_within_rounding_of_the_full_size_one(string reference, double enlarge)
+    public void Thumbnail_of_a_large_photo_is_taken_from_block_means_within_rounding_of_the_full_size_one(string reference, double enlarge)
     {
         using var image = Image.Load<Rgb24>(IngestTree.Reference(reference));
         image.Mutate(x => x.Resize((int)(image.Width * enlarge), (int)(image.Height * enlarge)));
@@ -63,18 +64,19 @@ public sealed class PhotoWorkerTests(EmbedderFixture fixture) : IDisposable
         var fast = PhotoWorker.Thumbnail(image);
         var exact = FullSize(image);
 
-        // Measured: at most 4 grey levels apart (graf1, fine detail), 0.07–0.44 on average, correlation ≥ 0.9998;
-        // the sweep calls thumbnails copies from a correlation of 0.95–0.97, so rounding of this size cannot matter.
+        // Measured: at most 10 grey levels apart (graf1 enlarged 2×: fine detail on a bin edge), 0.05–1.06 on average,
+        // correlation ≥ 0.9992; the sweep calls thumbnails copies from a correlation of 0.95–0.97.
         var differences = fast.Zip(exact, (a, b) => Math.Abs(a - b)).ToArray();
-        Assert.True(differences.Max() <= 6, $"largest difference {differences.Max()} grey levels");
-        Assert.True(differences.Average() <= 1.0, $"mean difference {differences.Average():0.000} grey levels");
+        Assert.True(differences.Max() <= 12, $"largest difference {differences.Max()} grey levels");
+        Assert.True(differences.Average() <= 1.5, $"mean difference {differences.Average():0.000} grey levels");
         Assert.True(Ncc(fast, exact) >= 0.999, $"correlation {Ncc(fast, exact):0.00000}");
     }
 
     [Theory]
+    [InlineData(4000, 100)]
+    [InlineData(100, 4000)]
     [InlineData(3000, 20)]
-    [InlineData(20, 3000)]
-    public void Thumbnail_of_a_long_thin_photo_keeps_every_row_or_column_it_has(int width, int height)
+    public void Thumbnail_of_a_long_thin_photo_keeps_at_least_32_samples_across(int width, int height)
     {
         using var image = new Image<Rgb24>(width, height);
         image.ProcessPixelRows(rows =>
@@ -92,7 +94,9 @@ public sealed class PhotoWorkerTests(EmbedderFixture fixture) : IDisposable
 
         var differences = PhotoWorker.Thumbnail(image).Zip(FullSize(image), (a, b) => Math.Abs(a - b)).ToArray();
 
-        Assert.True(differences.Max() <= 3, $"largest difference {differences.Max()} grey levels");
+        // Measured on this sawtooth, the worst case for moved bin edges: at most 7 grey levels, 2.2 on average.
+        Assert.True(differences.Max() <= 10, $"largest difference {differences.Max()} grey levels");
+        Assert.True(differences.Average() <= 3, $"mean difference {differences.Average():0.000} grey levels");
     }
 
     public void Dispose() => tree.Dispose();
