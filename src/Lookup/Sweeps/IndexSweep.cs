@@ -78,8 +78,17 @@ public static partial class IndexSweep
     public static SweepOptions EffectiveOptions(IndexFile file)
     {
         ArgumentNullException.ThrowIfNull(file);
-        var copy = VerdictThresholds.ReadOrDefault(file).Copy;
+        var thresholds = VerdictThresholds.ReadOrDefault(file);
         var defaults = new SweepOptions();
+        // Until calibrate has measured this catalogue, the sweep keeps its own measured defaults: the shared
+        // default copy band is tuned for match (whole photo and crops against a catalogue), not for pairs of
+        // catalogue photos.
+        if (ReferenceEquals(thresholds, VerdictThresholds.Default))
+        {
+            return defaults;
+        }
+
+        var copy = thresholds.Copy;
         return defaults with
         {
             CopyMaxDistance = copy,

@@ -1,3 +1,4 @@
+using System.Globalization;
 using Lookup.Calibration;
 using Lookup.Store;
 using Lookup.Tests.Store;
@@ -35,7 +36,7 @@ public sealed class CalibrationInputTests(ReferenceCatalogue catalogue)
 
         Assert.Equal(CalibrationProblem.TooFewPhotos, e.Problem);
         Assert.StartsWith($"{catalogue.IndexPath} holds 5 indexed photos with a SKU; calibrate needs at least 20", e.Message, StringComparison.Ordinal);
-        Assert.Contains("Ingest more photos first; until then match and sweep keep the default thresholds (copy ≤ 0.250", e.Message, StringComparison.Ordinal);
+        Assert.Contains(string.Create(CultureInfo.InvariantCulture, $"Ingest more photos first; until then match and sweep keep the default thresholds (copy ≤ {VerdictThresholds.Default.Copy:0.000}"), e.Message, StringComparison.Ordinal);
     }
 
     [Fact]
