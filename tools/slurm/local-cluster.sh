@@ -38,9 +38,10 @@ free_port() {
 record() { echo "$1 $2" >> "$dir/pids"; }
 
 wait_until() {
-  # wait_until SECONDS WHAT COMMAND...: polls every 0.5 s.
-  local limit=$(( $1 * 2 )) what="$2" i=0; shift 2
+  # wait_until SECONDS WHAT PID COMMAND...: polls every 0.5 s; gives up at once if the daemon PID has exited.
+  local limit=$(( $1 * 2 )) what="$2" pid="$3" i=0; shift 3
   until "$@" >/dev/null 2>&1; do
+    if [ ! -d "/proc/$pid" ]; then log "$what: the daemon (PID $pid) exited; see $dir/log/"; return 1; fi
     i=$((i + 1))
     if [ $i -ge $limit ]; then log "$what did not happen within $((limit / 2)) s"; return 1; fi
     sleep 0.5
@@ -63,6 +64,8 @@ start() {
   mkdir -p "$dir/munge" "$dir/state" "$dir/spool" "$dir/log" "$dir/run"
   chmod 700 "$dir" "$dir/munge"
   : > "$dir/pids"
+  # A start that fails half-way stops the daemons it did start.
+  trap 'if [ "${up:-0}" != 1 ]; then log "start failed: stopping what was started"; stop; fi' EXIT
 
   local host user cpus ctld_port slurmd_port
   host="$(hostname -s)"
@@ -81,18 +84,19 @@ start() {
          --pid-file="$dir/run/munged.pid" --log-file="$dir/log/munged.log" --seed-file="$dir/munge/munged.seed" \
          </dev/null >"$dir/log/munged.out" 2>&1 &
   record munged $!
-  wait_until 20 "munged socket" test -S "$dir/munge/munge.socket"
+  wait_until 20 "munged socket" $! test -S "$dir/munge/munge.socket"
 
   slurmctld -D -f "$dir/slurm.conf" </dev/null >"$dir/log/slurmctld.out" 2>&1 &
   record slurmctld $!
-  wait_until 30 "slurmctld answering" scontrol ping
+  wait_until 90 "slurmctld answering" $! scontrol ping
 
   slurmd -D -N "$host" -f "$dir/slurm.conf" </dev/null >"$dir/log/slurmd.out" 2>&1 &
   record slurmd $!
-  if ! wait_until 60 "node $host idle" node_idle; then
+  if ! wait_until 120 "node $host idle" $! node_idle; then
     tail -n 20 "$dir/log/slurmctld.log" "$dir/log/slurmd.log" "$dir/log/slurmd.out" >&2 || true
     exit 1
   fi
+  up=1
   log "cluster up: node $host, $cpus CPUs, slurmctld on port $ctld_port, slurmd on $slurmd_port"
   echo "export SLURM_CONF=$dir/slurm.conf"
 }

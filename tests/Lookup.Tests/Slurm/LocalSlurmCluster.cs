@@ -33,7 +33,7 @@ internal sealed class LocalSlurmCluster : IDisposable
         var cluster = new LocalSlurmCluster(script, folder);
         try
         {
-            var (exitCode, _, error) = ShellCommand.Run("bash", [script, "start", folder], limit: TimeSpan.FromMinutes(2));
+            var (exitCode, _, error) = ShellCommand.Run("bash", [script, "start", folder], limit: TimeSpan.FromMinutes(5));
             if (exitCode != 0)
             {
                 throw new InvalidOperationException($"{script} start {folder} exited {exitCode}:\n{error}\n{cluster.Logs()}");
