@@ -22,6 +22,7 @@ internal static class Program
         root.Subcommands.Add(IngestCommand.Create());
         root.Subcommands.Add(CalibrateCommand.Create());
         root.Subcommands.Add(StatusCommand.Create());
+        root.Subcommands.Add(CheckCommand.Create());
         root.Subcommands.Add(MergeCommand.Create());
         root.Subcommands.Add(SweepCommand.Create());
         root.Subcommands.Add(DismissCommand.Create());

@@ -16,7 +16,7 @@ namespace Lookup.Store;
 /// </summary>
 public sealed class GraphStore
 {
-    private const string MetaCollection = "graph_meta";
+    internal const string MetaCollection = "graph_meta";
 
     private readonly IndexFile _file;
     private HnswGraph? _graph;
