@@ -160,6 +160,15 @@ internal static class IngestCommand
             error.WriteLine($"lookup ingest: stopped while scanning and planning, before any photo was embedded; {request.Index} is as it was. Run the same command again.");
             return ExitCodes.Interrupted;
         }
+        catch (Exception e) when (e is IOException or LiteDB.LiteException)
+        {
+            progressLine.Finish();
+            error.WriteLine(
+                $"lookup ingest: writing {request.Index} failed: {e.Message} Every batch committed before the failure is kept and the " +
+                "batch being written was rolled back. Free disk space (or fix what the message names) and run the same command " +
+                "again: it carries on where this run stopped, embedding nothing twice.");
+            return ExitCodes.Failures;
+        }
 
         progressLine.Finish();
         if (request.Json)

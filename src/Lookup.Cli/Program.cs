@@ -7,12 +7,39 @@ internal static class Program
 {
     private static int Main(string[] args) => Run(args, new InvocationConfiguration());
 
-    /// <summary>Parses and runs one command line; any parse error exits with <see cref="ExitCodes.Usage"/>.</summary>
+    /// <summary>
+    /// Parses and runs one command line; any parse error exits with <see cref="ExitCodes.Usage"/>. Commands report
+    /// the failures they expect themselves; anything else that escapes (a damaged index LiteDB cannot read through,
+    /// a failing disk) is reported here in one paragraph with what to do, never as a stack trace, and exits with
+    /// <see cref="ExitCodes.Failures"/>.
+    /// </summary>
     internal static int Run(string[] args, InvocationConfiguration configuration)
     {
         var parseResult = CreateRootCommand().Parse(args);
-        var exitCode = parseResult.Invoke(configuration);
+        configuration.EnableDefaultExceptionHandler = false;
+        int exitCode;
+        try
+        {
+            exitCode = parseResult.Invoke(configuration);
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            configuration.Error.WriteLine(Unexpected(parseResult.CommandResult.Command.Name, e));
+            return ExitCodes.Failures;
+        }
+
         return parseResult.Errors.Count > 0 ? ExitCodes.Usage : exitCode;
+    }
+
+    private static string Unexpected(string command, Exception e)
+    {
+        var inner = e is AggregateException { InnerExceptions.Count: 1 } single ? single.InnerException! : e;
+        string cause = inner is LiteDB.LiteException or InvalidDataException or EndOfStreamException
+            ? "The index file looks damaged: run 'lookup check --index FILE' to see what is wrong and whether --repair can mend it; otherwise restore it from a backup or ingest the catalogue into a new index file."
+            : inner is IOException or UnauthorizedAccessException
+                ? "A file could not be read or written: check free disk space, permissions and the storage, then run the same command again (committed work is kept)."
+                : "This is a fault in Lookup: please report it with the command line and this message.";
+        return $"lookup {command}: stopped by an unexpected {inner.GetType().Name}: {inner.Message} {cause}";
     }
 
     internal static RootCommand CreateRootCommand()

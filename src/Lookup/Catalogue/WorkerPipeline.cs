@@ -80,7 +80,30 @@ internal static class WorkerPipeline
             threads[t].Start();
         }
 
-        DrainInBatches(results.Reader, batchSize, maxBatchDelay, commit);
+        try
+        {
+            DrainInBatches(results.Reader, batchSize, maxBatchDelay, commit);
+        }
+        catch (Exception e)
+        {
+            // A commit that fails (disk full, I/O error) ends the run: workers stop after the item in hand, the results
+            // still queued are dropped (never committed), and the commit's error is what the caller sees.
+            Interlocked.CompareExchange(ref failure, e, null);
+            while (results.Reader.WaitToReadAsync().AsTask().GetAwaiter().GetResult())
+            {
+                while (results.Reader.TryRead(out _))
+                {
+                }
+            }
+
+            foreach (var thread in threads)
+            {
+                thread.Join();
+            }
+
+            throw;
+        }
+
         foreach (var thread in threads)
         {
             thread.Join();

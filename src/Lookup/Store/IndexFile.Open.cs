@@ -23,7 +23,16 @@ public sealed partial class IndexFile
 
     private static IndexFile OpenWriter(string path)
     {
-        var writerLock = WriterLock.Acquire(path);
+        WriterLock writerLock;
+        try
+        {
+            writerLock = WriterLock.Acquire(path);
+        }
+        catch (UnauthorizedAccessException error)
+        {
+            throw ReadOnly(path, WriterLock.PathFor(path), error);
+        }
+
         LiteDatabase? database = null;
         try
         {
@@ -50,11 +59,37 @@ public sealed partial class IndexFile
             file.TryCheckpoint();
             return file;
         }
+        catch (UnauthorizedAccessException error)
+        {
+            DisposeQuietly(database);
+            writerLock.Dispose();
+            throw ReadOnly(path, path, error);
+        }
         catch
         {
-            database?.Dispose();
+            DisposeQuietly(database);
             writerLock.Dispose();
             throw;
+        }
+    }
+
+    /// <summary>A writer refused by file modes: ingest and the other writing commands cannot run, reading ones can.</summary>
+    private static IndexFileException ReadOnly(string path, string refused, Exception error) =>
+        new(path, IndexFileProblem.AccessDenied,
+            $"{path} cannot be written: access to {refused} was denied ({error.Message}). Writing (ingest, merge, calibrate, dismiss, " +
+            $"check --repair, storing a sweep) needs write access to the index file and its folder (for {System.IO.Path.GetFileName(JournalPathFor(path))} " +
+            "and the .lock file); match, status and check only read. Run as the index's owner or make it writable.",
+            error);
+
+    private static void DisposeQuietly(LiteDatabase? database)
+    {
+        try
+        {
+            database?.Dispose();
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or LiteException)
+        {
+            // Closing a database that failed to open; the original error is the one to report.
         }
     }
 
@@ -67,6 +102,20 @@ public sealed partial class IndexFile
 
         CheckLooksLikeLiteDb(path);
         var hold = ReaderRegistry.Enter(path, wait);
+        try
+        {
+            return OpenReader(path, hold);
+        }
+        catch (UnauthorizedAccessException error)
+        {
+            hold?.Dispose();
+            throw new IndexFileException(path, IndexFileProblem.AccessDenied,
+                $"{path} cannot be read: access was denied ({error.Message}). Run as a user who may read the index file (and its -log journal), or change its permissions.", error);
+        }
+    }
+
+    private static IndexFile OpenReader(string path, FileStream? hold)
+    {
         Stream? data = null;
         Stream? log = null;
         LiteDatabase? database = null;
@@ -88,7 +137,7 @@ public sealed partial class IndexFile
             database?.Dispose();
             data?.Dispose();
             log?.Dispose();
-            hold.Dispose();
+            hold?.Dispose();
             throw;
         }
     }
@@ -141,6 +190,11 @@ public sealed partial class IndexFile
         catch (IOException error)
         {
             throw new IndexFileException(path, IndexFileProblem.NotAnIndex, $"{path} cannot be read: {error.Message}", error);
+        }
+        catch (UnauthorizedAccessException error)
+        {
+            throw new IndexFileException(path, IndexFileProblem.AccessDenied,
+                $"{path} cannot be read: access was denied ({error.Message}). Run as a user who may read the index file, or change its permissions.", error);
         }
 
         if (read < head.Length || !head.AsSpan(32, LiteDbMagic.Length).SequenceEqual(LiteDbMagic))

@@ -20,4 +20,7 @@ public enum IndexFileProblem
 
     /// <summary>The file holds no graph yet, or its graph metadata is inconsistent.</summary>
     NoGraph,
+
+    /// <summary>The operating system refused access: a read-only file or folder, or one this user may not read.</summary>
+    AccessDenied,
 }

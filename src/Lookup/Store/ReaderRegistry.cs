@@ -10,8 +10,13 @@ internal static class ReaderRegistry
 {
     public static string PathFor(string indexPath) => indexPath + ".readers";
 
-    /// <summary>Registers a reader, waiting up to <paramref name="wait"/> while a writer is checkpointing.</summary>
-    public static FileStream Enter(string indexPath, TimeSpan wait)
+    /// <summary>
+    /// Registers a reader, waiting up to <paramref name="wait"/> while a writer is checkpointing. Returns null when the
+    /// registry cannot be created or opened for lack of permission (an index in a folder this user may not write):
+    /// such a reader runs unregistered. Only a writer running as another user, with write access there, could then
+    /// checkpoint under it; that rare setup is accepted rather than refusing to read a read-only index.
+    /// </summary>
+    public static FileStream? Enter(string indexPath, TimeSpan wait)
     {
         var deadline = DateTime.UtcNow + wait;
         while (true)
@@ -19,6 +24,10 @@ internal static class ReaderRegistry
             try
             {
                 return new FileStream(PathFor(indexPath), FileMode.OpenOrCreate, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete);
+            }
+            catch (UnauthorizedAccessException)
+            {
+                return null;
             }
             catch (IOException) when (DateTime.UtcNow < deadline)
             {

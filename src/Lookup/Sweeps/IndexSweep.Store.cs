@@ -19,6 +19,10 @@ public static partial class IndexSweep
                 using var file = IndexFile.Open(indexPath, IndexAccess.Write);
                 return (new SweepStore(file).Save(Summary(decided, newFindings), Findings(decided)), null);
             }
+            catch (IndexFileException e) when (e.Problem == IndexFileProblem.AccessDenied)
+            {
+                return (null, $"{e.Message} This sweep was reported but not stored.");
+            }
             catch (IndexFileException e) when (e.Problem == IndexFileProblem.WriterActive)
             {
                 var left = deadline - DateTime.UtcNow;
