@@ -36,7 +36,9 @@ public sealed partial class IndexFile
         LiteDatabase? database = null;
         try
         {
-            bool isNew = !File.Exists(path);
+            // A writer killed between creating the file and writing its first page leaves it empty; LiteDB starts a
+            // zero-length file afresh, so adopt it rather than refuse it as truncated.
+            bool isNew = !File.Exists(path) || new FileInfo(path).Length == 0;
             if (!isNew)
             {
                 CheckLooksLikeLiteDb(path);
