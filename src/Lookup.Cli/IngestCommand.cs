@@ -160,7 +160,16 @@ internal static class IngestCommand
             error.WriteLine($"lookup ingest: stopped while scanning and planning, before any photo was embedded; {request.Index} is as it was. Run the same command again.");
             return ExitCodes.Interrupted;
         }
-        catch (Exception e) when (e is IOException or LiteDB.LiteException)
+        catch (LiteDB.LiteException e)
+        {
+            progressLine.Finish();
+            error.WriteLine(
+                $"lookup ingest: {request.Index} could not be read or written ({e.Message}): the file looks damaged. Batches committed " +
+                $"before this are kept. Run 'lookup check --index {request.Index}' to see what is wrong and whether --repair can mend it; " +
+                "otherwise restore it from a backup or ingest the catalogue into a new index file.");
+            return ExitCodes.Failures;
+        }
+        catch (IOException e)
         {
             progressLine.Finish();
             error.WriteLine(

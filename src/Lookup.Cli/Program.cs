@@ -34,11 +34,10 @@ internal static class Program
     private static string Unexpected(string command, Exception e)
     {
         var inner = e is AggregateException { InnerExceptions.Count: 1 } single ? single.InnerException! : e;
-        string cause = inner is LiteDB.LiteException or InvalidDataException or EndOfStreamException
-            ? "The index file looks damaged: run 'lookup check --index FILE' to see what is wrong and whether --repair can mend it; otherwise restore it from a backup or ingest the catalogue into a new index file."
-            : inner is IOException or UnauthorizedAccessException
-                ? "A file could not be read or written: check free disk space, permissions and the storage, then run the same command again (committed work is kept)."
-                : "This is a fault in Lookup: please report it with the command line and this message.";
+        string cause = inner is IOException or UnauthorizedAccessException
+            ? "A file could not be read or written: check free disk space, permissions and the storage, then run the same command again (committed work is kept)."
+            : "If the index file is damaged (overwritten, or a copy cut short), 'lookup check --index FILE' says what is wrong and whether --repair can mend it; " +
+              "otherwise restore it from a backup or ingest the catalogue into a new index file. If the check finds nothing, this is a fault in Lookup: please report it with the command line and this message.";
         return $"lookup {command}: stopped by an unexpected {inner.GetType().Name}: {inner.Message} {cause}";
     }
 

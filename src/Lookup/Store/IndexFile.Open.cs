@@ -9,6 +9,10 @@ public sealed partial class IndexFile
     // LiteDB 5 writes this text at offset 32 of the first page of every data file.
     private static readonly byte[] LiteDbMagic = Encoding.ASCII.GetBytes("** This is a LiteDB file **");
 
+    // LiteDB 5's header page keeps the id of the last page in use at offset 64 (uint32, little-endian); pages are 8 KiB.
+    private const int LastPageIdOffset = 64;
+    private const int PageSize = 8192;
+
     /// <summary>
     /// Opens <paramref name="path"/>. <see cref="IndexAccess.Write"/> creates the file when missing and takes the
     /// writer lock; <see cref="IndexAccess.Read"/> opens a read-only snapshot and may run beside the writer.
@@ -199,7 +203,12 @@ public sealed partial class IndexFile
                 $"{path} cannot be read: access was denied ({error.Message}). Run as a user who may read the index file, or change its permissions.", error);
         }
 
-        if (read < head.Length || !head.AsSpan(32, LiteDbMagic.Length).SequenceEqual(LiteDbMagic))
+        if (read == head.Length && head.AsSpan(32, LiteDbMagic.Length).SequenceEqual(LiteDbMagic))
+        {
+            CheckNotTruncated(path, head);
+            return;
+        }
+
         {
             throw new IndexFileException(
                 path,
@@ -207,6 +216,31 @@ public sealed partial class IndexFile
                 read < head.Length
                     ? $"{path} is {read} bytes long, shorter than one LiteDB page (8192): it is truncated or not an index. Restore it from a backup or rebuild it with ingest."
                     : $"{path} is not a Lookup index (no LiteDB header). Point --index at a .lookup file made by ingest.");
+        }
+    }
+
+    /// <summary>
+    /// Refuses a data file shorter than the pages its header counts. Only when the journal is empty: a journal still
+    /// to be copied in (a writer stopped before its checkpoint) may legitimately hold pages the data file has not got.
+    /// LiteDB itself would open such a file and fail later, deep inside a read, with messages that name no file.
+    /// </summary>
+    private static void CheckNotTruncated(string path, byte[] header)
+    {
+        var journal = new FileInfo(JournalPathFor(path));
+        if (journal.Exists && journal.Length > 0)
+        {
+            return;
+        }
+
+        long pages = (long)System.Buffers.Binary.BinaryPrimitives.ReadUInt32LittleEndian(header.AsSpan(LastPageIdOffset)) + 1;
+        long length = new FileInfo(path).Length;
+        if (length < pages * PageSize)
+        {
+            throw new IndexFileException(
+                path,
+                IndexFileProblem.NotAnIndex,
+                $"{path} is truncated: it is {length:N0} bytes long but its header counts {pages:N0} pages of {PageSize} bytes ({pages * PageSize:N0} bytes); " +
+                "a copy was cut short or the disk filled up while copying. Restore it from a backup, or ingest the catalogue into a new index file.");
         }
     }
 
