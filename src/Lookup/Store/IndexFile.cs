@@ -49,6 +49,11 @@ public sealed partial class IndexFile : IDisposable
     private readonly Stream? _logStream;
     private bool _disposed;
 
+    // Set when the storage failed under a commit (disk full, I/O error): LiteDB may still hold the failed
+    // transaction's locks, and a checkpoint would only fail again and hide the first error. The journal keeps
+    // every transaction committed before the failure; the next writer copies it in.
+    private bool _faulted;
+
     private IndexFile(string path, IndexAccess access, LiteDatabase database, WriterLock? writerLock, FileStream? readerHold, Stream? dataStream, Stream? logStream)
     {
         Path = path;
@@ -98,11 +103,33 @@ public sealed partial class IndexFile : IDisposable
                 Database.Commit();
             }
         }
-        catch
+        catch (Exception error)
         {
+            bool storage = IsStorageFailure(error);
+            _faulted |= storage;
             if (own)
             {
-                Database.Rollback();
+                try
+                {
+                    Database.Rollback();
+                }
+                catch (Exception rollbackError) when (_faulted || IsStorageFailure(rollbackError))
+                {
+                    // Rolling back writes to the journal too; on a full disk it fails as well. The pages of an
+                    // unfinished transaction are never marked confirmed, so the next open ignores them.
+                    _faulted = true;
+                }
+            }
+
+            if (storage)
+            {
+                throw new IndexFileException(
+                    Path,
+                    IndexFileProblem.WriteFailed,
+                    $"writing {Path} failed: {error.Message} Every transaction committed before the failure is kept and this one " +
+                    "was rolled back. Free disk space (or fix what the message names) and run the same command again: it carries on " +
+                    "where this run stopped.",
+                    error);
             }
 
             throw;
@@ -150,7 +177,7 @@ public sealed partial class IndexFile : IDisposable
 
         try
         {
-            if (IsWritable)
+            if (IsWritable && !_faulted)
             {
                 CheckpointIfNoReaders();
             }
@@ -158,13 +185,34 @@ public sealed partial class IndexFile : IDisposable
         finally
         {
             _disposed = true;
-            Database.Dispose();
+            CloseDatabase();
             _dataStream?.Dispose();
             _logStream?.Dispose();
             _readerHold?.Dispose();
             _writerLock?.Dispose();
         }
     }
+
+    private void CloseDatabase()
+    {
+        try
+        {
+            Database.Dispose();
+        }
+        catch (Exception) when (_faulted)
+        {
+            // The storage already failed and LiteDB may still hold the failed transaction's locks; the error that
+            // matters has been thrown to the caller.
+        }
+    }
+
+    /// <summary>
+    /// A write the operating system refused: an I/O error (ENOSPC "No space left on device", EIO, ...), or EFBIG (a
+    /// file-size limit, e.g. 4 GiB on FAT32), which .NET reports as an ArgumentOutOfRangeException from RandomAccess.
+    /// </summary>
+    internal static bool IsStorageFailure(Exception e) =>
+        e is IOException
+        || (e is ArgumentOutOfRangeException && e.TargetSite?.DeclaringType?.FullName == "System.IO.RandomAccess");
 
     internal void RequireWritable()
     {

@@ -23,4 +23,7 @@ public enum IndexFileProblem
 
     /// <summary>The operating system refused access: a read-only file or folder, or one this user may not read.</summary>
     AccessDenied,
+
+    /// <summary>A write failed under a commit (disk full, file-size limit, I/O error); earlier commits are kept.</summary>
+    WriteFailed,
 }

@@ -19,7 +19,7 @@ public static partial class IndexSweep
                 using var file = IndexFile.Open(indexPath, IndexAccess.Write);
                 return (new SweepStore(file).Save(Summary(decided, newFindings), Findings(decided)), null);
             }
-            catch (IndexFileException e) when (e.Problem == IndexFileProblem.AccessDenied)
+            catch (IndexFileException e) when (e.Problem is IndexFileProblem.AccessDenied or IndexFileProblem.WriteFailed)
             {
                 return (null, $"{e.Message} This sweep was reported but not stored.");
             }

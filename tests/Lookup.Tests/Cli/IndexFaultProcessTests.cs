@@ -24,7 +24,7 @@ public sealed class IndexFaultProcessTests(IngestedTemplate template)
     [InlineData("text", "ingest", "shorter than one LiteDB page (8192): it is truncated or not an index")]
     [InlineData("zip", "check", "is not a Lookup index (no LiteDB header)")]
     [InlineData("zip", "ingest", "is not a Lookup index (no LiteDB header)")]
-    [InlineData("other-litedb", "match", "is a LiteDB file but not a Lookup index (no schema record)")]
+    [InlineData("other-litedb", "status", "is a LiteDB file but not a Lookup index (no schema record)")]
     [InlineData("other-litedb", "ingest", "is a LiteDB file but not a Lookup index (no schema record)")]
     [InlineData("newer-schema", "ingest", "uses index schema 99; this Lookup reads schema 1 and older. Update Lookup to open it.")]
     [InlineData("newer-schema", "sweep", "uses index schema 99; this Lookup reads schema 1 and older. Update Lookup to open it.")]
@@ -97,24 +97,36 @@ public sealed class IndexFaultProcessTests(IngestedTemplate template)
         }
     }
 
-    [Fact]
-    public void A_write_the_kernel_refuses_mid_ingest_is_reported_plainly_keeps_every_committed_batch_and_the_rerun_finishes()
+    [Theory]
+    [InlineData("full-disk", "No space left on device")]
+    [InlineData("file-size-limit", "Specified file length was too large for the file system")]
+    public void A_write_the_kernel_refuses_mid_ingest_is_reported_plainly_keeps_every_committed_batch_and_the_rerun_finishes(string fault, string reason)
     {
         if (OperatingSystem.IsWindows())
         {
             return;
         }
 
-        string index = Path.Combine(Path.GetDirectoryName(template.CopyOfIndex())!, "fresh.lookup");
-        // RLIMIT_FSIZE (prlimit, util-linux) caps every file the child writes; with SIGXFSZ ignored (inherited
-        // through exec) the write past the cap fails with EFBIG, the same failed write(2) a full disk gives as ENOSPC.
-        string[] wrapper = ["sh", "-c", "trap '' XFSZ; exec prlimit --fsize=" + FileSizeLimit + " \"$@\"", "sh"];
+        string folder = Path.GetDirectoryName(template.CopyOfIndex())!;
+        string index = Path.Combine(folder, "fresh.lookup");
+        string[] wrapper = fault == "full-disk"
+            // A tmpfs of StorageLimit bytes mounted over the index's folder in a private user and mount namespace
+            // (unshare, util-linux; no real root needed): the kernel's own ENOSPC. The namespace ends with the child,
+            // so the folder's contents are copied out to the real folder first.
+            ? ["unshare", "--user", "--map-root-user", "--mount", "sh", "-c",
+                $"mkdir -p '{folder}/full' && mount -t tmpfs -o size={StorageLimit} tmpfs '{folder}/full' && \"$@\"; rc=$?; cp -a '{folder}/full/.' '{folder}/'; exit $rc", "sh"]
+            // RLIMIT_FSIZE (prlimit) caps every file the child writes; with SIGXFSZ ignored (inherited through exec)
+            // the write past the cap fails with EFBIG, as a file past 4 GiB does on FAT32. W^X double mapping is off
+            // because the runtime's memfd mapping would hit the cap at startup.
+            : ["sh", "-c", $"trap '' XFSZ; exec prlimit --fsize={StorageLimit} env DOTNET_EnableWriteXorExecute=0 \"$@\"", "sh"];
+        string[] args = IngestArgs(fault == "full-disk" ? Path.Combine(folder, "full", "fresh.lookup") : index);
 
-        var (exitCode, output, error) = LookupProcess.Run(IngestArgs(index), wrapper);
+        var (exitCode, output, error) = LookupProcess.Run(args, wrapper);
 
         Assert.True(exitCode == 1, $"exit code {exitCode}\nstdout: {output}\nstderr: {error}");
-        Assert.StartsWith($"lookup ingest: writing {index} failed: ", error, StringComparison.Ordinal);
-        Assert.Contains("Every batch committed before the failure is kept", error, StringComparison.Ordinal);
+        Assert.StartsWith($"lookup ingest: writing {args[3]} failed: ", error, StringComparison.Ordinal);
+        Assert.Contains(reason, error, StringComparison.Ordinal);
+        Assert.Contains("Every transaction committed before the failure is kept", error, StringComparison.Ordinal);
         AssertNoStackTrace(error);
         var kept = IndexSnapshot.Read(index);
         Assert.InRange(kept.Indexed.Count(), 1, IngestedTemplate.Photos - 1);
@@ -230,8 +242,9 @@ public sealed class IndexFaultProcessTests(IngestedTemplate template)
         Assert.Equal(stored + 1, StoredSweeps(index));
     }
 
-    /// <summary>Bytes the child may write to any one file: the new index's first commits fit, the 12-photo run does not.</summary>
-    private const int FileSizeLimit = 160 * 1024;
+    /// <summary>Bytes of storage (or of any one file) the child gets: the first few one-photo commits (about 100 KiB of
+    /// journal each, measured) fit, the 12-photo run does not.</summary>
+    private const int StorageLimit = 512 * 1024;
 
     private static string[] IngestArgs(string index, string? root = null) =>
         ["ingest", root ?? "", "--index", index, "--json", "--quiet", "--workers", "1", "--batch-size", "1"];
