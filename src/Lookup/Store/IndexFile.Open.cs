@@ -127,10 +127,10 @@ public sealed partial class IndexFile
         LiteDatabase? database = null;
         try
         {
-            data = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete);
+            data = new PageAlignedReadStream(new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete), PageSize);
             string journal = JournalPathFor(path);
             log = File.Exists(journal)
-                ? new FileStream(journal, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete)
+                ? new PageAlignedReadStream(new FileStream(journal, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete), PageSize)
                 : new MemoryStream();
             var opened = Wrap(path, () => OpenEngine(path, data, log, readOnly: true));
             database = opened;
@@ -250,7 +250,7 @@ public sealed partial class IndexFile
         {
             return open();
         }
-        catch (Exception error) when (error is LiteException or IOException or InvalidCastException or ArgumentException or IndexOutOfRangeException or OverflowException)
+        catch (Exception error) when (error is LiteException or IOException or InvalidCastException or ArgumentException or IndexOutOfRangeException or OverflowException or NotSupportedException)
         {
             throw Damaged(path, error);
         }
