@@ -184,6 +184,40 @@ public sealed class IndexFileTests
     }
 
     [Fact]
+    public void A_reader_opens_a_journal_that_ends_in_a_partial_page_and_sees_every_whole_commit()
+    {
+        using var temp = new TempIndex();
+        using var writer = IndexFile.Open(temp.Path, IndexAccess.Write);
+        writer.InTransaction(() => writer.Database.GetCollection("photos").Insert(new BsonDocument { ["_id"] = 1 }));
+        // What a write cut short by a full disk leaves: part of a page after the last committed one.
+        using (var journal = new FileStream(IndexFile.JournalPathFor(temp.Path), FileMode.Append, FileAccess.Write, FileShare.ReadWrite))
+        {
+            journal.Write(new byte[3000]);
+        }
+
+        using var reader = IndexFile.Open(temp.Path, IndexAccess.Read);
+
+        Assert.Equal([1], reader.Database.GetCollection("photos").FindAll().Select(d => d["_id"].AsInt32));
+    }
+
+    [Fact]
+    public void Open_refuses_a_file_shorter_than_the_pages_its_header_counts_naming_both_sizes()
+    {
+        using var temp = new TempIndex();
+        CreateIndexWithData(temp.Path);
+        long length = new FileInfo(temp.Path).Length;
+        using (var stream = new FileStream(temp.Path, FileMode.Open, FileAccess.Write))
+        {
+            stream.SetLength(length - 8192);
+        }
+
+        var error = Assert.Throws<IndexFileException>(() => IndexFile.Open(temp.Path, IndexAccess.Read));
+
+        Assert.Equal(IndexFileProblem.NotAnIndex, error.Problem);
+        Assert.Contains($"is truncated: it is {length - 8192:N0} bytes long but its header counts {length / 8192:N0} pages", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_reader_cannot_write()
     {
         using var temp = new TempIndex();
