@@ -218,6 +218,21 @@ public sealed class IndexFileTests
     }
 
     [Fact]
+    public void An_empty_index_file_left_by_a_killed_writer_is_adopted()
+    {
+        using var temp = new TempIndex();
+        File.WriteAllBytes(temp.Path, []);
+
+        using (var writer = IndexFile.Open(temp.Path, IndexAccess.Write))
+        {
+            Assert.Equal(IndexFile.CurrentSchemaVersion, writer.SchemaVersion);
+        }
+
+        using var reader = IndexFile.Open(temp.Path, IndexAccess.Read);
+        Assert.Equal(IndexFile.CurrentSchemaVersion, reader.SchemaVersion);
+    }
+
+    [Fact]
     public void A_reader_cannot_write()
     {
         using var temp = new TempIndex();
