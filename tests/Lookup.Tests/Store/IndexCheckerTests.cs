@@ -250,9 +250,10 @@ public sealed class IndexCheckerTests : IDisposable
         index.Change((graph, _) => graph.Add(index.Vectors[1]));
         string before = Digest(index.Path);
 
-        var error = Assert.Throws<IOException>(() => index.Repair(() => throw new IOException("No space left on device (injected)")));
+        var error = Assert.Throws<IndexFileException>(() => index.Repair(() => throw new IOException("No space left on device (injected)")));
 
-        Assert.Contains("injected", error.Message, StringComparison.Ordinal);
+        Assert.Equal(IndexFileProblem.WriteFailed, error.Problem);
+        Assert.StartsWith($"writing {index.Path} failed: No space left on device (injected) Every transaction committed before the failure is kept", error.Message, StringComparison.Ordinal);
         Assert.Equal(before, Digest(index.Path));
         Assert.Equal("orphan-node", Assert.Single(index.Check().Findings).Code);
         AssertRepaired(index.Repair(), dropped: []);
