@@ -21,7 +21,6 @@ public sealed class IndexFaultProcessTests(IngestedTemplate template)
 
     [Theory]
     [InlineData("text", "status", "shorter than one LiteDB page (8192): it is truncated or not an index")]
-    [InlineData("text", "ingest", "shorter than one LiteDB page (8192): it is truncated or not an index")]
     [InlineData("zip", "check", "is not a Lookup index (no LiteDB header)")]
     [InlineData("zip", "ingest", "is not a Lookup index (no LiteDB header)")]
     [InlineData("other-litedb", "status", "is a LiteDB file but not a Lookup index (no schema record)")]

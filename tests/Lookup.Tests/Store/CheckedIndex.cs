@@ -88,16 +88,17 @@ internal sealed class CheckedIndex : IDisposable
         return new PhotoTable(file).Find(PathOf(photo))!;
     }
 
-    public IndexCheckReport Check()
+    /// <summary>Checks the index; hashing the model files (about 45 MB) only when a test is about the model.</summary>
+    public IndexCheckReport Check(bool verifyModelFiles = false)
     {
         using var file = IndexFile.Open(Path, IndexAccess.Read);
-        return IndexChecker.Check(file);
+        return IndexChecker.Check(file, verifyModelFiles);
     }
 
-    public IndexRepairResult Repair(Action? beforeGraphWrite = null)
+    public IndexRepairResult Repair(Action? beforeGraphWrite = null, bool verifyModelFiles = false)
     {
         using var file = IndexFile.Open(Path, IndexAccess.Write);
-        return IndexChecker.Repair(file, verifyModelFiles: true, beforeGraphWrite);
+        return IndexChecker.Repair(file, verifyModelFiles, beforeGraphWrite);
     }
 
     public void Dispose() => _temp.Dispose();

@@ -17,15 +17,16 @@ public sealed class IndexCheckerTests : IDisposable
     [Fact]
     public void A_sound_index_is_clean_and_a_repair_changes_nothing()
     {
-        var report = index.Check();
+        var report = index.Check(verifyModelFiles: true);
 
         Assert.Empty(report.Findings);
         Assert.Equal(CheckedIndex.Photos, report.PhotoRecords);
         Assert.Equal(CheckedIndex.Photos, report.LiveNodes);
         Assert.True(report.Links > 0);
         string before = Digest(index.Path);
-        var repair = index.Repair();
+        var repair = index.Repair(verifyModelFiles: true);
         Assert.False(repair.GraphRebuilt);
+        Assert.Empty(repair.After.Findings);
         Assert.Equal(before, Digest(index.Path));
     }
 
@@ -238,7 +239,7 @@ public sealed class IndexCheckerTests : IDisposable
             db.GetCollection("catalogue_meta").Upsert(settings);
         });
 
-        var finding = Assert.Single(index.Check().Findings);
+        var finding = Assert.Single(index.Check(verifyModelFiles: true).Findings);
 
         Assert.Equal(("model-changed", CheckSeverity.Warning), (finding.Code, finding.Severity));
         Assert.Contains($"now gives fingerprint {CheckedIndex.Fingerprint[..12]}", finding.Message, StringComparison.Ordinal);
