@@ -26,6 +26,7 @@ internal static class Program
         root.Subcommands.Add(SweepCommand.Create());
         root.Subcommands.Add(DismissCommand.Create());
         root.Subcommands.Add(MatchCommand.Create());
+        root.Subcommands.Add(DemoCommand.Create());
         return root;
     }
 }
