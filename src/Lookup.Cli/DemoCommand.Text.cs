@@ -51,7 +51,7 @@ internal static partial class DemoCommand
             Invariant($"not stocked: {result.NotStockedRight} of {result.Field.Count - result.Stocked} answered no match."));
         output.WriteLine("Look-alikes (M8 or M10, zinc or black) are meant to be hard: an unsure answer lists the SKUs to compare.");
 
-        var findings = result.Sweep.Report.FindingsByKind.Where(k => k.Value > 0).Select(k => $"{k.Value} {FindingKindText.Label(k.Key).ToLowerInvariant()}");
+        var findings = result.Sweep.Report.FindingsByKind.Where(k => k.Value > 0).Select(k => $"{k.Value} {Lower(FindingKindText.Label(k.Key))}");
         output.WriteLine(Invariant(
             $"3. Swept the index in {result.SweepTime.TotalSeconds:0.0} s: {result.Sweep.Report.Findings.Count} findings ({string.Join(", ", findings)})."));
         output.WriteLine($"   Report: {reportPath}");
@@ -63,7 +63,7 @@ internal static partial class DemoCommand
                 d.Defect.Kind,
                 string.Join(", ", d.Defect.Files.Select(Path.GetFileName)),
                 d.Found ? "found" : "MISSED",
-                d.Finding is { } finding ? $"#{d.FindingNumber} {FindingKindText.Label(finding.Kind).ToLowerInvariant()}" : d.Defect.Note);
+                d.Finding is { } finding ? $"#{d.FindingNumber} {Lower(FindingKindText.Label(finding.Kind))}" : d.Defect.Note);
         }
 
         output.Write(defects.ToString());
@@ -135,6 +135,9 @@ internal static partial class DemoCommand
         caution = MatchCaution.Text,
         next = NextSteps.Select(s => s.Command),
     };
+
+    /// <summary>A heading used mid-sentence: first letter lower case, SKU kept as written.</summary>
+    private static string Lower(string label) => char.ToLowerInvariant(label[0]) + label[1..];
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }
