@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Text.Json;
+using Lookup.Cli.Output;
 using Lookup.Demo;
 using Lookup.Embedding;
 using Lookup.Store;
@@ -84,7 +85,7 @@ internal static partial class DemoCommand
         var temporary = request.Index is null ? Path.Combine(Path.GetTempPath(), "lookup-demo-" + Guid.NewGuid().ToString("N")) : null;
         var indexPath = request.Index ?? Path.Combine(temporary!, "demo.lookup");
         var reportPath = Path.GetFullPath(request.Report ?? Path.Combine(Path.GetTempPath(), DefaultReportName));
-        var progress = new Output.SynchronousProgress<string>(stage =>
+        var progress = new SynchronousProgress<string>(stage =>
         {
             if (!request.Quiet)
             {
