@@ -108,6 +108,14 @@ public sealed class IndexFaultProcessTests(IngestedTemplate template)
 
         string folder = Path.GetDirectoryName(template.CopyOfIndex())!;
         string index = Path.Combine(folder, "fresh.lookup");
+        if (fault == "full-disk")
+        {
+            var probe = Shell(["unshare", "--user", "--map-root-user", "--mount", "true"]);
+            Assert.True(probe.ExitCode == 0,
+                $"the full-disk case mounts a small tmpfs in a private user and mount namespace, which this system refuses ({probe.Error.Trim()}); " +
+                "allow unprivileged user namespaces (sysctl kernel.unprivileged_userns_clone=1, or a container runtime profile that permits unshare).");
+        }
+
         string[] wrapper = fault == "full-disk"
             // A tmpfs of StorageLimit bytes mounted over the index's folder in a private user and mount namespace
             // (unshare, util-linux; no real root needed): the kernel's own ENOSPC. The namespace ends with the child,
@@ -387,6 +395,20 @@ public sealed class IndexFaultProcessTests(IngestedTemplate template)
         }
 
         throw new TimeoutException($"no {what} after {PollLimit}");
+    }
+
+    private static (int ExitCode, string Error) Shell(string[] command)
+    {
+        var info = new ProcessStartInfo(command[0]) { RedirectStandardError = true, RedirectStandardOutput = true };
+        foreach (var arg in command.Skip(1))
+        {
+            info.ArgumentList.Add(arg);
+        }
+
+        using var process = Process.Start(info)!;
+        string error = process.StandardError.ReadToEnd();
+        process.WaitForExit();
+        return (process.ExitCode, error);
     }
 
     /// <summary>Whether the operating system refuses creating <paramref name="path"/> to the child (through <paramref name="wrapper"/>).</summary>
