@@ -63,6 +63,11 @@ internal static class TiffContainer
                 return ContainerScan.Broken("the first page's image data lies beyond the end of the file");
             }
 
+            if (pages == 0 && FirstValueBeyondEnd(reader, (int)offset + 2, entries, data.Length) is { } tag)
+            {
+                return ContainerScan.Broken($"the value of tag {tag} lies beyond the end of the file");
+            }
+
             pages++;
             var following = (long)reader.U32((int)next);
             if (pages > MaxPages || following == offset)
@@ -75,6 +80,36 @@ internal static class TiffContainer
 
         return pages > 0 ? ContainerScan.Whole(pages) : ContainerScan.Broken("has no page");
     }
+
+    /// <summary>
+    /// The first tag of a directory whose value is stored out of line (more than 4 bytes, TIFF 6.0 section 2) and
+    /// does not fit in the file, or null. A file cut inside such a value (often the last thing a writer puts down)
+    /// is truncated even when its pixels are whole.
+    /// </summary>
+    private static ushort? FirstValueBeyondEnd(Reader reader, int first, int entries, long length)
+    {
+        for (var i = 0; i < entries; i++)
+        {
+            var entry = first + (12 * i);
+            long bytes = (long)reader.U32(entry + 4) * TypeBytes(reader.U16(entry + 2));
+            if (bytes > 4 && reader.U32(entry + 8) + bytes > length)
+            {
+                return reader.U16(entry);
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>Bytes per value of a TIFF 6.0 field type (section 2, "Types"); 0 for unknown types, which are skipped.</summary>
+    private static int TypeBytes(ushort type) => type switch
+    {
+        1 or 2 or 6 or 7 => 1,
+        3 or 8 => 2,
+        4 or 9 or 11 or 13 => 4,
+        5 or 10 or 12 => 8,
+        _ => 0,
+    };
 
     private static bool PixelDataFits(Reader reader, int first, int entries, long length)
     {
