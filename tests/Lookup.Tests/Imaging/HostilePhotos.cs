@@ -28,8 +28,12 @@ internal static class HostilePhotos
     private const string TooManyFrames = "TooManyFrames";
     private const string UnknownFormat = "UnknownFormat";
 
-    /// <summary>Every case, in a fixed order (the random bytes come from <paramref name="seed"/>).</summary>
-    public static IReadOnlyList<HostilePhoto> All(int seed = 2026)
+    private static readonly Lazy<IReadOnlyList<HostilePhoto>> Cases = new(() => Build(2026));
+
+    /// <summary>Every case, in a fixed order (random bytes from a fixed seed); built once per process.</summary>
+    public static IReadOnlyList<HostilePhoto> All() => Cases.Value;
+
+    private static IReadOnlyList<HostilePhoto> Build(int seed)
     {
         var random = new Random(seed);
         var jpeg = Seed(new JpegEncoder { Quality = 90 });
