@@ -59,6 +59,7 @@ internal static class HostilePhotos
         list.Add(new("jpeg-bad-huffman.jpg", Overwrite(jpeg, Segment(jpeg, 0xC4) + 5, Enumerable.Repeat((byte)0xFF, 16).ToArray()), Corrupt, "JPEG whose Huffman table counts are all 255"));
         list.Add(new("jpeg-then-html.jpg", [0xFF, 0xD8, 0xFF, .. "<html><body>not a photo</body></html>"u8], Corrupt, "JPEG signature followed by HTML"));
         list.Add(new("webp-garbage-vp8.webp", Overwrite(webp, 30, RandomBytes(random, Math.Min(200, webp.Length - 40))), Corrupt, "WebP whose VP8 bitstream is random bytes"));
+        list.Add(new("tiff-strips-short.tif", TiffUncompressedDeclaring(40, 2_097_179), Corrupt, "uncompressed TIFF of 3 KB declaring 40 × 2,097,179 (84 MP, under the pixel limit)"));
         list.Add(new("tiff-strip-beyond-end.tif", TiffDeclaring(64, 64, stripOffset: 1_000_000), Corrupt, "TIFF whose strip lies beyond the end of the file"));
         list.Add(new("gif-no-frame.gif", [.. gif.AsSpan(0, 13 + 3 * 256), 0x3B], Corrupt, "GIF with a header and a trailer and no frame"));
 
@@ -351,6 +352,17 @@ internal static class HostilePhotos
         Entry(279, 4, (uint)strip.Length);
         strip.CopyTo(file, dataAt);
         return file;
+    }
+
+    /// <summary>An uncompressed grey TIFF whose one strip holds 3,000 bytes, far fewer than its declared size needs.</summary>
+    private static byte[] TiffUncompressedDeclaring(uint width, uint height)
+    {
+        var file = TiffDeclaring(width, height, stripOffset: null);
+        var directory = 10;
+        BinaryPrimitives.WriteUInt16LittleEndian(file.AsSpan(directory + (3 * 12) + 8), 1); // Compression = none
+        var dataAt = file.Length - PngBytes.Zlib(new byte[256]).Length;
+        BinaryPrimitives.WriteUInt32LittleEndian(file.AsSpan(directory + (8 * 12) + 8), 3_000); // StripByteCounts
+        return [.. file.AsSpan(0, dataAt), .. new byte[3_000]];
     }
 
     private static byte[] Zip()

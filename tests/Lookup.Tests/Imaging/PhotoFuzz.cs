@@ -42,6 +42,22 @@ internal static class PhotoFuzz
         ];
     }
 
+    /// <summary>Case <paramref name="index"/> of the run with <paramref name="seed"/>, for replaying a reported case.</summary>
+    public static (string Name, byte[] Bytes, string Edits) Case(int seed, int index)
+    {
+        var seeds = Seeds();
+        var mutator = new ByteMutator(seed);
+        for (var i = 0; ; i++)
+        {
+            var (name, original) = seeds[i % seeds.Count];
+            var (bytes, edits) = mutator.Mutate(original);
+            if (i == index)
+            {
+                return (name, bytes, edits);
+            }
+        }
+    }
+
     /// <summary>Runs <paramref name="cases"/> mutated files through the decoder, round-robin over the seeds.</summary>
     public static FuzzReport Run(int cases, int seed, PhotoLimits limits)
     {
