@@ -92,6 +92,11 @@ public sealed class PhotoDecoder
             throw PhotoRejections.TooManyPixels(path, scan.LargestFrame.Width, scan.LargestFrame.Height, Limits.MaxPixels);
         }
 
+        if (format == PhotoFormat.Tiff)
+        {
+            content = TiffContainer.ClampRowsPerStrip(content);
+        }
+
         var decoder = configuration.ImageFormatsManager.FindDecoder(imageFormat);
         var header = Identify(decoder, content, path, format);
         var image = DecodePixels(decoder, content, path, format, header);

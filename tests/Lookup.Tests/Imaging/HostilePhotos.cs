@@ -97,6 +97,7 @@ internal static class HostilePhotos
         list.Add(new("one-by-10000.png", Encode(Stripe(1, 10_000), new PngEncoder()), null, "1 × 10,000 PNG"));
         list.Add(new("10000-by-one.jpg", Encode(Stripe(10_000, 1), new JpegEncoder()), null, "10,000 × 1 JPEG"));
         list.Add(new("gif-trailer-missing.gif", gif[..^1], null, "GIF whose trailer byte is missing (every frame complete)"));
+        list.Add(new("tiff-rows-per-strip-8m.tif", TiffWithRowsPerStrip(tiff, 8_388_608), null, "TIFF whose RowsPerStrip is 8,388,608 (legal: one strip; cost 1 GB before it was lowered)"));
         list.Add(new("tiff-padding-missing.tif", tiff[..^1], null, "TIFF missing its last byte, the word-alignment pad after the last value"));
         return list;
     }
@@ -363,6 +364,26 @@ internal static class HostilePhotos
         var dataAt = file.Length - PngBytes.Zlib(new byte[256]).Length;
         BinaryPrimitives.WriteUInt32LittleEndian(file.AsSpan(directory + (8 * 12) + 8), 3_000); // StripByteCounts
         return [.. file.AsSpan(0, dataAt), .. new byte[3_000]];
+    }
+
+    /// <summary>A copy of a little-endian TIFF with the RowsPerStrip (tag 278) of its first directory set to <paramref name="rows"/>.</summary>
+    private static byte[] TiffWithRowsPerStrip(byte[] tiff, uint rows)
+    {
+        var copy = (byte[])tiff.Clone();
+        var directory = (int)BinaryPrimitives.ReadUInt32LittleEndian(copy.AsSpan(4));
+        var entries = BinaryPrimitives.ReadUInt16LittleEndian(copy.AsSpan(directory));
+        for (var i = 0; i < entries; i++)
+        {
+            var entry = directory + 2 + (12 * i);
+            if (BinaryPrimitives.ReadUInt16LittleEndian(copy.AsSpan(entry)) == 278)
+            {
+                BinaryPrimitives.WriteUInt16LittleEndian(copy.AsSpan(entry + 2), 4);
+                BinaryPrimitives.WriteUInt32LittleEndian(copy.AsSpan(entry + 8), rows);
+                return copy;
+            }
+        }
+
+        throw new InvalidOperationException("the seed TIFF has no RowsPerStrip tag");
     }
 
     private static byte[] Zip()
