@@ -1,3 +1,4 @@
+using Lookup.Catalogue;
 using Lookup.Imaging;
 using Lookup.Store;
 using Lookup.Tests.Embedding;
@@ -91,11 +92,14 @@ public sealed class HostileIngestTests(EmbedderFixture fixture) : IDisposable
         var index = IndexSnapshot.Read(tree.IndexPath);
 
         Assert.Equal("caf\uFFFD-\uFFFD.jpg", listed);
+        Assert.Equal(HostileTree.GoodPhotos + 1, summary.Scanned);
         Assert.Equal(HostileTree.GoodPhotos, index.Indexed.Count());
         var record = index.Records["CORPUS/" + listed];
         Assert.Equal((PhotoStatus.Failed, "Unreadable"), (record.Status, record.FailureReason));
         Assert.Contains("the name is not valid UTF-8", record.FailureMessage, StringComparison.Ordinal);
-        Assert.Empty(summary.ScanProblems);
+        var folder = Assert.Single(summary.ScanProblems);
+        Assert.Equal(("CORPUS/Teile-\uFFFD", ScanProblemKind.ReadError), (folder.RelativePath, folder.Kind));
+        Assert.EndsWith("rename it using UTF-8 characters; this folder was not scanned.", folder.Message, StringComparison.Ordinal);
         Assert.Equal(1, summary.Failed);
 
         var again = EngineIngest.Run(tree, fixture.Embedder);

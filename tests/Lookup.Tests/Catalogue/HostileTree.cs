@@ -25,6 +25,9 @@ internal static class HostileTree
     /// </summary>
     public const string NonUtf8Bytes = @"caf\351-\377.jpg";
 
+    /// <summary>A folder name that is not valid UTF-8 ("Teile-", byte 0xFF), holding one photo.</summary>
+    public const string NonUtf8Folder = @"Teile-\377";
+
     /// <summary>Writes the tree; returns relative path → expected failure reason (null: must be indexed).</summary>
     public static Dictionary<string, string?> Fill(IngestTree tree, bool hostile = true)
     {
@@ -53,15 +56,16 @@ internal static class HostileTree
     }
 
     /// <summary>
-    /// Copies a good photo to CORPUS/ under the non-UTF-8 name <see cref="NonUtf8Bytes"/> with /bin/sh, and returns
-    /// the name as .NET lists it (each invalid byte decoded as U+FFFD).
+    /// Copies a good photo to CORPUS/ under the non-UTF-8 name <see cref="NonUtf8Bytes"/>, and into a folder named
+    /// <see cref="NonUtf8Folder"/>, with /bin/sh; returns the file name as .NET lists it (invalid bytes as U+FFFD).
     /// </summary>
     public static string AddNonUtf8Name(IngestTree tree)
     {
         var folder = Path.GetDirectoryName(tree.Write("CORPUS/.keep-folder", []))!;
         File.Delete(Path.Combine(folder, ".keep-folder"));
         var source = IngestTree.Reference(IngestTree.Distinct[GoodPhotos]);
-        var info = new ProcessStartInfo("/bin/sh") { ArgumentList = { "-c", $"cp \"$0\" \"$1/$(printf '{NonUtf8Bytes}')\"", source, folder } };
+        var script = $"cp \"$0\" \"$1/$(printf '{NonUtf8Bytes}')\" && mkdir \"$1/$(printf '{NonUtf8Folder}')\" && cp \"$0\" \"$1/$(printf '{NonUtf8Folder}')/a.jpg\"";
+        var info = new ProcessStartInfo("/bin/sh") { ArgumentList = { "-c", script, source, folder } };
         using (var shell = Process.Start(info)!)
         {
             shell.WaitForExit();
@@ -80,7 +84,7 @@ internal static class HostileTree
             return;
         }
 
-        var info = new ProcessStartInfo("/bin/sh") { ArgumentList = { "-c", $"rm -f \"$0/$(printf '{NonUtf8Bytes}')\"", folder } };
+        var info = new ProcessStartInfo("/bin/sh") { ArgumentList = { "-c", $"rm -rf \"$0/$(printf '{NonUtf8Bytes}')\" \"$0/$(printf '{NonUtf8Folder}')\"", folder } };
         using var shell = Process.Start(info)!;
         shell.WaitForExit();
     }
