@@ -42,6 +42,11 @@ internal static class IngestCommand
             Description = "Refuse photos larger than this many megapixels (read from the header, before decoding).",
             DefaultValueFactory = _ => PhotoLimits.Default.MaxPixels / 1e6,
         };
+        var maxDecodeSeconds = new Option<double>("--max-decode-seconds")
+        {
+            Description = "Give up on a photo whose decode takes longer than this many seconds (it is recorded as timed out).",
+            DefaultValueFactory = _ => PhotoLimits.Default.DecodeTimeout.TotalSeconds,
+        };
         var shard = new Option<string?>("--shard") { Description = "Process only shard K of N (K/N, 1-based), chosen by a hash of each photo's relative path." };
         var batchSize = new Option<int>("--batch-size")
         {
@@ -65,7 +70,7 @@ internal static class IngestCommand
             be used, 2 usage error, 130 stopped by Ctrl+C or SIGTERM (what was done is kept; run again to finish).
             """)
         {
-            tree, index, skuFrom, workers, keepMissing, retryFailed, maxMegapixels, shard, batchSize, json, quiet, model,
+            tree, index, skuFrom, workers, keepMissing, retryFailed, maxMegapixels, maxDecodeSeconds, shard, batchSize, json, quiet, model,
         };
         command.SetAction((parseResult, cancellationToken) => Task.FromResult(Run(
             new IngestRequest(
@@ -76,6 +81,7 @@ internal static class IngestCommand
                 parseResult.GetValue(keepMissing),
                 parseResult.GetValue(retryFailed),
                 parseResult.GetValue(maxMegapixels),
+                parseResult.GetValue(maxDecodeSeconds),
                 parseResult.GetValue(shard),
                 parseResult.GetValue(batchSize),
                 parseResult.GetValue(json),
@@ -89,9 +95,9 @@ internal static class IngestCommand
 
     internal static int Run(IngestRequest request, TextWriter output, TextWriter error, CancellationToken cancellationToken)
     {
-        if (request.Workers < 1 || request.MaxMegapixels <= 0 || request.BatchSize < 1)
+        if (request.Workers < 1 || request.MaxMegapixels <= 0 || request.BatchSize < 1 || !(request.MaxDecodeSeconds is > 0 and <= 86_400))
         {
-            error.WriteLine("lookup ingest: --workers and --batch-size must be at least 1 and --max-megapixels above 0.");
+            error.WriteLine("lookup ingest: --workers and --batch-size must be at least 1, --max-megapixels above 0 and --max-decode-seconds between 0 and 86400.");
             return ExitCodes.Usage;
         }
 
@@ -135,7 +141,11 @@ internal static class IngestCommand
             Workers = request.Workers,
             KeepMissing = request.KeepMissing,
             RetryFailed = request.RetryFailed,
-            Limits = PhotoLimits.Default with { MaxPixels = (long)(request.MaxMegapixels * 1e6) },
+            Limits = PhotoLimits.Default with
+            {
+                MaxPixels = (long)(request.MaxMegapixels * 1e6),
+                DecodeTimeout = TimeSpan.FromSeconds(request.MaxDecodeSeconds),
+            },
             Shard = shard,
             BatchSize = request.BatchSize,
         };

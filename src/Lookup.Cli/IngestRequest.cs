@@ -9,6 +9,7 @@ internal sealed record IngestRequest(
     bool KeepMissing,
     bool RetryFailed,
     double MaxMegapixels,
+    double MaxDecodeSeconds,
     string? Shard,
     int BatchSize,
     bool Json,

@@ -1,11 +1,17 @@
 using System.CommandLine;
+using Lookup.Cli.Output;
 
 namespace Lookup.Cli;
 
 /// <summary>The command registry: each command lives in its own file and is added here.</summary>
 internal static class Program
 {
-    private static int Main(string[] args) => Run(args, new InvocationConfiguration());
+    /// <summary>Runs the command line; on a terminal, names cannot send control sequences (<see cref="TerminalSafeWriter"/>).</summary>
+    private static int Main(string[] args) => Run(args, new InvocationConfiguration
+    {
+        Output = Console.IsOutputRedirected ? Console.Out : new TerminalSafeWriter(Console.Out),
+        Error = Console.IsErrorRedirected ? Console.Error : new TerminalSafeWriter(Console.Error),
+    });
 
     /// <summary>
     /// Parses and runs one command line; any parse error exits with <see cref="ExitCodes.Usage"/>. Commands report

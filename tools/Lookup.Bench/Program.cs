@@ -8,6 +8,7 @@ namespace Lookup.Bench;
 ///   dotnet run -c Release --project tools/Lookup.Bench -- kernel            (dot-product kernel vs TensorPrimitives)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- crash-test [--rounds 8]   (kill -9 a writer, reopen, check)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- merge [--quick] [--parts 4]   (lookup merge of 100k stored vectors)
+///   dotnet run -c Release --project tools/Lookup.Bench -- fuzz [--cases 20000] [--seed 1]   (byte-mutation fuzz of the photo decoder)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- prepare          (embeds and caches the bench vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- extract-fashion-mnist [--count 2000]
 /// </summary>
@@ -27,6 +28,7 @@ internal static class Program
             "persisted" => PersistedBench.Reopen(),
             "crash-test" => CrashTest.Run(args),
             "merge" => MergeBench.Run(args),
+            "fuzz" => FuzzBench.Run(args),
 
             "sweep" => SweepBench.Run(quick),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
@@ -44,7 +46,7 @@ internal static class Program
 
     private static int Usage()
     {
-        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | sweep [--quick] | prepare | extract-fashion-mnist [--count N]");
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | fuzz [--cases N] [--seed S] | sweep [--quick] | prepare | extract-fashion-mnist [--count N]");
         return 2;
     }
 }

@@ -47,6 +47,30 @@ internal sealed partial class CatalogueScanner
                 : null);
         }
 
+        /// <summary>
+        /// A child the listing returned but that cannot be reached by its name: gone since the listing, or named
+        /// with bytes that are not UTF-8 (allowed on Linux), which .NET decodes to U+FFFD, giving a name no file has.
+        /// A photo named so is kept as a flagged entry, so ingest records it instead of losing it.
+        /// </summary>
+        private void TakeUnreachable(FileSystemInfo child, string relativePath)
+        {
+            if (!child.Name.Contains('\uFFFD', StringComparison.Ordinal))
+            {
+                Report(new FileNotFoundException(null, child.FullName), child.FullName, relativePath, child is DirectoryInfo ? "folder" : "file");
+                return;
+            }
+
+            const string BadName = "the name is not valid UTF-8 (its bad bytes are shown as \uFFFD), so it cannot be opened by name; rename it using UTF-8 characters";
+            if (child is FileInfo && ImageSignature.HasImageExtension(child.FullName))
+            {
+                _entries.Add(new CatalogueEntry(child.FullName, relativePath, 0, 0, ImageFormat.Unknown, BadName, "Unreadable"));
+                return;
+            }
+
+            Add(ScanProblemKind.ReadError, child.FullName, relativePath,
+                $"{child.FullName}: {BadName}; this {(child is DirectoryInfo ? "folder" : "file")} was not scanned.");
+        }
+
         private void Keep(string fullPath, string relativePath, long size, long mtime, ImageFormat format,
             bool hasImageName, string? problem)
         {

@@ -36,7 +36,12 @@ internal sealed partial class CatalogueScanner
             foreach (var child in children)
             {
                 var childRelative = relativePath.Length == 0 ? child.Name : relativePath + "/" + child.Name;
-                if (IsHidden(child))
+                if ((int)child.Attributes == -1)
+                {
+                    // Listed but not found again by its name (.NET reports every attribute set, Hidden included).
+                    TakeUnreachable(child, childRelative);
+                }
+                else if (IsHidden(child))
                 {
                     _skippedHidden++;
                 }

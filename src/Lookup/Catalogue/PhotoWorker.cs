@@ -36,7 +36,8 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
         if (!entry.IsImage)
         {
             // The decoder's reason names, so the index uses one vocabulary whichever step refused the file.
-            string reason = entry.Size == 0 ? nameof(PhotoRejectionReason.EmptyFile) : nameof(PhotoRejectionReason.UnknownFormat);
+            string reason = entry.ProblemReason
+                ?? (entry.Size == 0 ? nameof(PhotoRejectionReason.EmptyFile) : nameof(PhotoRejectionReason.UnknownFormat));
             return Failed(job, record, reason, $"{entry.FullPath}: {entry.ContentProblem ?? "not an image file"}.");
         }
 

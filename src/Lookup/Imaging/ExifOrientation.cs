@@ -1,3 +1,4 @@
+using System.Buffers.Binary;
 using SixLabors.ImageSharp;
 using SixLabors.ImageSharp.Metadata.Profiles.Exif;
 using SixLabors.ImageSharp.Processing;
@@ -12,11 +13,62 @@ internal static class ExifOrientation
 {
     public const int Upright = 1;
 
-    public static int Read(Image image)
+    private const ushort OrientationTag = 274;
+    private const ushort TypeShort = 3;
+    private const ushort TypeLong = 4;
+
+    /// <summary>
+    /// The orientation in a TIFF-structured block (a TIFF file or an EXIF block, see <see cref="ExifBlock"/>): tag 274
+    /// of the first directory. Anything missing, cut short or out of range gives <see cref="Upright"/>.
+    /// </summary>
+    public static int Read(ReadOnlySpan<byte> tiff)
     {
-        var profile = image.Metadata.ExifProfile ?? image.Frames.RootFrame.Metadata.ExifProfile;
-        var value = profile?.GetValue(ExifTag.Orientation)?.Value ?? Upright;
-        return value is >= 1 and <= 8 ? value : Upright;
+        if (tiff.Length < 8)
+        {
+            return Upright;
+        }
+
+        bool little;
+        if (tiff.StartsWith("II*\0"u8))
+        {
+            little = true;
+        }
+        else if (tiff.StartsWith("MM\0*"u8))
+        {
+            little = false;
+        }
+        else
+        {
+            return Upright;
+        }
+
+        long directory = U32(tiff, 4, little);
+        if (directory + 2 > tiff.Length)
+        {
+            return Upright;
+        }
+
+        var entries = U16(tiff, (int)directory, little);
+        for (var i = 0; i < entries; i++)
+        {
+            var entry = directory + 2 + (12L * i);
+            if (entry + 12 > tiff.Length)
+            {
+                break;
+            }
+
+            var at = (int)entry;
+            if (U16(tiff, at, little) != OrientationTag || U32(tiff, at + 4, little) < 1)
+            {
+                continue;
+            }
+
+            var type = U16(tiff, at + 2, little);
+            long value = type == TypeShort ? U16(tiff, at + 8, little) : type == TypeLong ? U32(tiff, at + 8, little) : Upright;
+            return value is >= 1 and <= 8 ? (int)value : Upright;
+        }
+
+        return Upright;
     }
 
     /// <summary>Turns stored pixels upright for orientation <paramref name="orientation"/> and clears the tag.</summary>
@@ -36,4 +88,10 @@ internal static class ExifOrientation
 
         image.Metadata.ExifProfile?.RemoveValue(ExifTag.Orientation);
     }
+
+    private static ushort U16(ReadOnlySpan<byte> data, int at, bool little) =>
+        little ? BinaryPrimitives.ReadUInt16LittleEndian(data[at..]) : BinaryPrimitives.ReadUInt16BigEndian(data[at..]);
+
+    private static uint U32(ReadOnlySpan<byte> data, int at, bool little) =>
+        little ? BinaryPrimitives.ReadUInt32LittleEndian(data[at..]) : BinaryPrimitives.ReadUInt32BigEndian(data[at..]);
 }

@@ -20,17 +20,18 @@ internal static class GifContainer
 
         var position = 13 + ColourTableBytes(data[10]);
         var frames = 0;
+        (int Width, int Height) largest = default;
         while (true)
         {
             if (position >= data.Length)
             {
-                return frames > 0 ? ContainerScan.Whole(frames) : ContainerScan.Broken("ends before the first frame");
+                return frames > 0 ? ContainerScan.Whole(frames, largest) : ContainerScan.Broken("ends before the first frame");
             }
 
             switch (data[position])
             {
                 case Trailer:
-                    return frames > 0 ? ContainerScan.Whole(frames) : ContainerScan.Broken("has no frame");
+                    return frames > 0 ? ContainerScan.Whole(frames, largest) : ContainerScan.Broken("has no frame");
                 case ExtensionIntroducer:
                     position = SkipSubBlocks(data, position + 2);
                     break;
@@ -41,11 +42,12 @@ internal static class GifContainer
                     }
 
                     frames++;
+                    largest = Larger(largest, (data[position + 5] | (data[position + 6] << 8), data[position + 7] | (data[position + 8] << 8)));
                     position = SkipSubBlocks(data, position + 10 + ColourTableBytes(data[position + 9]) + 1);
                     break;
                 default:
                     // Bytes after complete frames are tolerated (some writers pad); before any frame they are not.
-                    return frames > 0 ? ContainerScan.Whole(frames) : ContainerScan.Broken($"unexpected block 0x{data[position]:X2}");
+                    return frames > 0 ? ContainerScan.Whole(frames, largest) : ContainerScan.Broken($"unexpected block 0x{data[position]:X2}");
             }
 
             if (position < 0)
@@ -54,6 +56,13 @@ internal static class GifContainer
             }
         }
     }
+
+    /// <summary>
+    /// An image descriptor may declare a frame far larger than the logical screen the header reports (GIF89a
+    /// section 20 places no bound), so the largest one is kept for the pixel limit.
+    /// </summary>
+    private static (int Width, int Height) Larger((int Width, int Height) a, (int Width, int Height) b) =>
+        (long)b.Width * b.Height > (long)a.Width * a.Height ? b : a;
 
     private static int ColourTableBytes(byte packed) => (packed & 0x80) != 0 ? 3 << ((packed & 0x07) + 1) : 0;
 

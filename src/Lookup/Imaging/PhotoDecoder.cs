@@ -16,8 +16,9 @@ namespace Lookup.Imaging;
 
 /// <summary>
 /// Turns a photo file into upright 8-bit RGB pixels, or a <see cref="PhotoRejectedException"/> saying why not.
-/// Order of work: file size → format from the first bytes → container walk (truncation, frame count) → header
-/// (pixel count) → decode under a deadline → EXIF orientation → RGB over white. Nothing is decoded until the header
+/// Order of work: file size → format from the first bytes → container walk (truncation, frame count, GIF frame
+/// sizes) → header (pixel count) → decode under a deadline, metadata ignored → EXIF orientation read from the
+/// bytes → RGB over white. Nothing is decoded until the header
 /// has passed the limits. Thread-safe: one instance serves every worker.
 /// </summary>
 public sealed class PhotoDecoder
@@ -86,10 +87,20 @@ public sealed class PhotoDecoder
             throw PhotoRejections.TooManyFrames(path, scan.Frames, Limits.MaxFrames);
         }
 
+        if ((long)scan.LargestFrame.Width * scan.LargestFrame.Height > Limits.MaxPixels)
+        {
+            throw PhotoRejections.TooManyPixels(path, scan.LargestFrame.Width, scan.LargestFrame.Height, Limits.MaxPixels);
+        }
+
+        if (format == PhotoFormat.Tiff)
+        {
+            content = TiffContainer.ClampRowsPerStrip(content);
+        }
+
         var decoder = configuration.ImageFormatsManager.FindDecoder(imageFormat);
         var header = Identify(decoder, content, path, format);
         var image = DecodePixels(decoder, content, path, format, header);
-        var orientation = ExifOrientation.Read(image);
+        var orientation = ExifOrientation.Read(ExifBlock.Find(format, content.Span));
         ExifOrientation.Apply(image, orientation);
         var info = new PhotoInfo(format, header.Width, header.Height, content.Length, scan.Frames, orientation);
         return new DecodedPhoto(path, image, info);
@@ -163,7 +174,6 @@ public sealed class PhotoDecoder
             {
                 using var withAlpha = decoder.Decode<Rgba32>(configuration, stream, timeout.Token);
                 image = AlphaFlattening.OverWhite(withAlpha, configuration);
-                CopyOrientation(withAlpha, image);
             }
 
             // WebP, BMP and uncompressed TIFF read their data in one go and cannot be interrupted; a decode that
@@ -179,16 +189,6 @@ public sealed class PhotoDecoder
         {
             image?.Dispose();
             throw Translate(e, path, format, header.Width, header.Height);
-        }
-    }
-
-    private static void CopyOrientation(Image source, Image target)
-    {
-        var orientation = ExifOrientation.Read(source);
-        if (orientation != ExifOrientation.Upright)
-        {
-            target.Metadata.ExifProfile = new SixLabors.ImageSharp.Metadata.Profiles.Exif.ExifProfile();
-            target.Metadata.ExifProfile.SetValue(SixLabors.ImageSharp.Metadata.Profiles.Exif.ExifTag.Orientation, (ushort)orientation);
         }
     }
 
@@ -231,7 +231,9 @@ public sealed class PhotoDecoder
 
     /// <summary>
     /// Only the six formats Lookup accepts are registered: TGA has no signature, so its detector would take random
-    /// bytes for an image. Processing runs on one thread because ingest already runs one worker per core.
+    /// bytes for an image. Processing runs on one thread because ingest already runs one worker per core. Metadata
+    /// is never parsed (crafted EXIF and compressed text chunks cost seconds and memory in ImageSharp 2.1's readers);
+    /// the orientation is read from the bytes by <see cref="ExifBlock"/> instead.
     /// </summary>
     private static Configuration CreateConfiguration()
     {
@@ -247,8 +249,11 @@ public sealed class PhotoDecoder
         };
 
         // Never decode all frames of an animation: the first is the photo.
-        configuration.ImageFormatsManager.SetDecoder(GifFormat.Instance, new GifDecoder { DecodingMode = FrameDecodingMode.First, MaxFrames = 1 });
-        configuration.ImageFormatsManager.SetDecoder(TiffFormat.Instance, new TiffDecoder { DecodingMode = FrameDecodingMode.First });
+        configuration.ImageFormatsManager.SetDecoder(GifFormat.Instance, new GifDecoder { DecodingMode = FrameDecodingMode.First, MaxFrames = 1, IgnoreMetadata = true });
+        configuration.ImageFormatsManager.SetDecoder(TiffFormat.Instance, new TiffDecoder { DecodingMode = FrameDecodingMode.First, IgnoreMetadata = true });
+        configuration.ImageFormatsManager.SetDecoder(JpegFormat.Instance, new JpegDecoder { IgnoreMetadata = true });
+        configuration.ImageFormatsManager.SetDecoder(PngFormat.Instance, new PngDecoder { IgnoreMetadata = true });
+        configuration.ImageFormatsManager.SetDecoder(WebpFormat.Instance, new WebpDecoder { IgnoreMetadata = true });
         return configuration;
     }
 }

@@ -1,6 +1,10 @@
 using Lookup.Imaging;
 using SixLabors.ImageSharp;
+using SixLabors.ImageSharp.Formats;
 using SixLabors.ImageSharp.Formats.Jpeg;
+using SixLabors.ImageSharp.Formats.Png;
+using SixLabors.ImageSharp.Formats.Tiff;
+using SixLabors.ImageSharp.Formats.Webp;
 using SixLabors.ImageSharp.Metadata.Profiles.Exif;
 using SixLabors.ImageSharp.PixelFormats;
 
@@ -63,7 +67,85 @@ public sealed class ExifOrientationTests : IDisposable
         }
     }
 
+    [Theory]
+    [InlineData("png")]
+    [InlineData("webp")]
+    [InlineData("jpg")]
+    public void Decode_reads_the_orientation_imagesharp_writes_into_each_format(string extension)
+    {
+        // SixLabors.ImageSharp (a general-purpose reference encoder) writes the EXIF block: an eXIf chunk in PNG,
+        // an EXIF chunk behind VP8X in WebP, an APP1 segment in JPEG. The decoder finds it in the bytes itself.
+        using var stored = BlockImage();
+        using var copy = stored.Clone();
+        copy.Metadata.ExifProfile = new ExifProfile();
+        copy.Metadata.ExifProfile.SetValue(ExifTag.Orientation, (ushort)6);
+        IImageEncoder encoder = extension switch
+        {
+            "png" => new PngEncoder(),
+            "webp" => new WebpEncoder { FileFormat = WebpFileFormatType.Lossless },
+            _ => new JpegEncoder { Quality = 100 },
+        };
+        var path = photos.Save("turned." + extension, copy, encoder);
+
+        using var photo = new PhotoDecoder().Decode(path);
+
+        Assert.Equal(6, photo.Info.Orientation);
+        Assert.Equal(new Size(stored.Height, stored.Width), photo.Image.Size());
+        var (x, y) = StoredFor(6, Block / 2, Block / 2, stored.Width, stored.Height);
+        AssertClose(stored[x, y], photo.Image[Block / 2, Block / 2]);
+    }
+
+    [Fact]
+    public void Decode_reads_the_orientation_tag_of_a_tiff_directory()
+    {
+        // A baseline TIFF written by ImageSharp, with tag 274 (SHORT, value 8) added to its first directory by hand
+        // (TIFF 6.0 section 2: entries sorted by tag; a SHORT value sits in the entry itself).
+        using var stored = BlockImage();
+        using var stream = new MemoryStream();
+        stored.Save(stream, new TiffEncoder());
+        var path = photos.Write("turned.tif", WithTiffOrientation(stream.ToArray(), 8));
+
+        using var photo = new PhotoDecoder().Decode(path);
+
+        Assert.Equal(8, photo.Info.Orientation);
+        Assert.Equal(new Size(stored.Height, stored.Width), photo.Image.Size());
+    }
+
     public void Dispose() => photos.Dispose();
+
+    private static byte[] WithTiffOrientation(byte[] tiff, ushort orientation)
+    {
+        var directory = (int)System.Buffers.Binary.BinaryPrimitives.ReadUInt32LittleEndian(tiff.AsSpan(4));
+        var entries = System.Buffers.Binary.BinaryPrimitives.ReadUInt16LittleEndian(tiff.AsSpan(directory));
+        var insertAt = directory + 2;
+        while (insertAt < directory + 2 + (12 * entries) && System.Buffers.Binary.BinaryPrimitives.ReadUInt16LittleEndian(tiff.AsSpan(insertAt)) < 274)
+        {
+            insertAt += 12;
+        }
+
+        // The new entry goes at the end of the file as a fresh directory copy, so no offset inside the file moves.
+        var moved = new List<byte>(tiff);
+        if (moved.Count % 2 == 1)
+        {
+            moved.Add(0); // directories start on a word boundary
+        }
+
+        var newDirectory = moved.Count;
+        var copy = new byte[2 + (12 * (entries + 1)) + 4];
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt16LittleEndian(copy, (ushort)(entries + 1));
+        var before = insertAt - (directory + 2);
+        tiff.AsSpan(directory + 2, before).CopyTo(copy.AsSpan(2));
+        var entry = copy.AsSpan(2 + before, 12);
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt16LittleEndian(entry, 274);
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt16LittleEndian(entry[2..], 3);
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt32LittleEndian(entry[4..], 1);
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt16LittleEndian(entry[8..], orientation);
+        tiff.AsSpan(insertAt, (12 * entries) - before).CopyTo(copy.AsSpan(2 + before + 12));
+        moved.AddRange(copy);
+        var result = moved.ToArray();
+        System.Buffers.Binary.BinaryPrimitives.WriteUInt32LittleEndian(result.AsSpan(4), (uint)newDirectory);
+        return result;
+    }
 
     /// <summary>3 × 2 blocks of distinct flat colours, aligned to JPEG's 16-pixel MCUs so they survive encoding.</summary>
     private static Image<Rgb24> BlockImage()
