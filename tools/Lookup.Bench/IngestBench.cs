@@ -83,57 +83,100 @@ internal static class IngestBench
         using var embedder = ImageEmbedder.Load(ModelCard.Default);
         var decoder = new PhotoDecoder();
         WarmUp(root, embedder);
+        var cpuRows = new List<string>();
         Console.WriteLine();
-        Console.WriteLine("Single-thread ms per photo (mean) and rates in photos/s. Bound = cores ÷ (decode + resize + inference), the ingest target's; all-work bound also counts read + SHA-256 and dHash + thumbnail.");
+        Console.WriteLine("Wall time: single-thread ms per photo (mean) and rates in photos/s. Bound = cores ÷ (decode + resize + inference), the ingest target's; all-work bound also counts read + SHA-256 and dHash + thumbnail. Bare workers: one thread per core doing every worker step on its share of the photos, with no channel, writer or index.");
         Console.WriteLine();
-        Console.WriteLine("| photo | round | load | read + hash | decode + resize | dHash + thumbnail | inference | bound | all-work bound | inference only | ingest | ingest ÷ bound | ingest ÷ all-work bound |");
-        Console.WriteLine("| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
+        Console.WriteLine("| photo | round | load | read + hash | decode + resize | dHash + thumbnail | inference | bound | all-work bound | inference only | bare workers | ingest | ingest ÷ bound | ingest ÷ all-work bound |");
+        Console.WriteLine("| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
         for (int round = 1; round <= rounds; round++)
         {
             foreach (var (label, files) in sets)
             {
                 string load = Load();
-                var steps = SingleThread(files, decoder, embedder);
+                var (wall, cpu) = SingleThread(files, decoder, embedder);
                 double cores = Environment.ProcessorCount;
-                double bound = cores * 1000 / (steps.DecodeResize + steps.Inference);
-                double allWork = cores * 1000 / (steps.ReadHash + steps.DecodeResize + steps.HashThumbnail + steps.Inference);
+                double bound = cores * 1000 / (wall.DecodeResize + wall.Inference);
+                double allWork = cores * 1000 / wall.Sum;
                 double inferenceOnly = InferenceOnly(embedder, files.Length);
-                double ingest = Ingest(Path.GetDirectoryName(Path.GetDirectoryName(files[0]))!, root, embedder, files.Length);
+                var bare = BareWorkers(files, decoder, embedder);
+                var ingest = Ingest(Path.GetDirectoryName(Path.GetDirectoryName(files[0]))!, root, embedder, files.Length);
                 Console.WriteLine(Invariant(
-                    $"| {label} | {round} | {load} | {steps.ReadHash:0.0} | {steps.DecodeResize:0.0} | {steps.HashThumbnail:0.0} | {steps.Inference:0.0} | {bound:0.0} | {allWork:0.0} | {inferenceOnly:0.0} | {ingest:0.0} | {ingest / bound:0.00} | {ingest / allWork:0.00} |"));
+                    $"| {label} | {round} | {load} | {wall.ReadHash:0.0} | {wall.DecodeResize:0.0} | {wall.HashThumbnail:0.0} | {wall.Inference:0.0} | {bound:0.0} | {allWork:0.0} | {inferenceOnly:0.0} | {bare.Rate:0.0} | {ingest.Rate:0.0} | {ingest.Rate / bound:0.00} | {ingest.Rate / allWork:0.00} |"));
+                double perPhoto = ingest.CpuMs / files.Length;
+                cpuRows.Add(Invariant(
+                    $"| {label} | {round} | {cpu.ReadHash:0.0} | {cpu.DecodeResize:0.0} | {cpu.HashThumbnail:0.0} | {cpu.Inference:0.0} | {bare.CpuMs / files.Length:0.0} | {perPhoto:0.0} | {(cpu.DecodeResize + cpu.Inference) / perPhoto:0.00} | {cpu.Sum / perPhoto:0.00} | {ingest.CpuMs / ingest.WallMs:0.00} |"));
             }
         }
+
+        Console.WriteLine();
+        Console.WriteLine("CPU time (less sensitive to other work on the machine): single-thread CPU ms per photo of each step, and the real ingest's process CPU ms per photo (all threads: workers, writer, scan, plan). Share = those steps' CPU ÷ the ingest's CPU per photo; an idle machine would give ingest ≈ cores × share ÷ (decode + resize + inference) if the workers kept every core busy. Cores used = ingest CPU time ÷ its wall time.");
+        Console.WriteLine();
+        Console.WriteLine("| photo | round | read + hash | decode + resize | dHash + thumbnail | inference | bare workers CPU per photo | ingest CPU per photo | share: decode + resize + inference | share: all worker steps | cores used |");
+        Console.WriteLine("| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
+        cpuRows.ForEach(Console.WriteLine);
     }
 
-    /// <summary>One pass of everything a worker does to each photo, each step timed on this thread alone.</summary>
-    private static (double ReadHash, double DecodeResize, double HashThumbnail, double Inference) SingleThread(
-        string[] files, PhotoDecoder decoder, ImageEmbedder embedder)
+    /// <summary>One pass of everything a worker does to each photo, each step timed on this thread alone: mean wall
+    /// and thread CPU milliseconds per photo.</summary>
+    private static (Steps Wall, Steps Cpu) SingleThread(string[] files, PhotoDecoder decoder, ImageEmbedder embedder)
     {
         var tensor = new float[embedder.TensorLength];
         var embedding = new float[embedder.Dimension];
-        double readHash = 0, decodeResize = 0, hashThumbnail = 0, inference = 0;
+        var wall = new double[4];
+        var cpu = new double[4];
         foreach (var path in files)
         {
-            long t0 = Stopwatch.GetTimestamp();
+            var marks = new (long Wall, double Cpu)[5];
+            marks[0] = Mark();
             byte[] bytes = File.ReadAllBytes(path);
             _ = SHA256.HashData(bytes);
-            long t1 = Stopwatch.GetTimestamp();
+            marks[1] = Mark();
             using var photo = decoder.Decode(bytes, path);
             TensorWriter.WriteTensor(photo.Image, embedder.Normalisation, tensor);
-            long t2 = Stopwatch.GetTimestamp();
+            marks[2] = Mark();
             _ = DifferenceHash.Compute(photo.Image);
             _ = PhotoThumbnail.Of(photo.Image);
-            long t3 = Stopwatch.GetTimestamp();
+            marks[3] = Mark();
             embedder.Embed(tensor, embedding);
-            long t4 = Stopwatch.GetTimestamp();
-            readHash += Ms(t0, t1);
-            decodeResize += Ms(t1, t2);
-            hashThumbnail += Ms(t2, t3);
-            inference += Ms(t3, t4);
+            marks[4] = Mark();
+            for (int s = 0; s < 4; s++)
+            {
+                wall[s] += Stopwatch.GetElapsedTime(marks[s].Wall, marks[s + 1].Wall).TotalMilliseconds;
+                cpu[s] += marks[s + 1].Cpu - marks[s].Cpu;
+            }
         }
 
         int n = files.Length;
-        return (readHash / n, decodeResize / n, hashThumbnail / n, inference / n);
+        return (new Steps(wall[0] / n, wall[1] / n, wall[2] / n, wall[3] / n), new Steps(cpu[0] / n, cpu[1] / n, cpu[2] / n, cpu[3] / n));
+    }
+
+    private static (long Wall, double Cpu) Mark() => (Stopwatch.GetTimestamp(), CpuClock.ThreadMs());
+
+    /// <summary>Every worker step on one thread per core, each thread taking the next photo, with no channel, writer
+    /// or index: what the ingest would reach if the pipeline around the workers cost nothing.</summary>
+    private static (double Rate, double CpuMs) BareWorkers(string[] files, PhotoDecoder decoder, ImageEmbedder embedder)
+    {
+        int next = -1;
+        var threads = Enumerable.Range(0, Environment.ProcessorCount).Select(worker => new Thread(() =>
+        {
+            var embedding = new float[embedder.Dimension];
+            int i;
+            while ((i = Interlocked.Increment(ref next)) < files.Length)
+            {
+                byte[] bytes = File.ReadAllBytes(files[i]);
+                _ = SHA256.HashData(bytes);
+                using var photo = decoder.Decode(bytes, files[i]);
+                _ = DifferenceHash.Compute(photo.Image);
+                _ = PhotoThumbnail.Of(photo.Image);
+                embedder.Embed(photo.Image, embedding);
+            }
+        })).ToList();
+        double cpu = CpuClock.ProcessMs();
+        var clock = Stopwatch.StartNew();
+        threads.ForEach(t => t.Start());
+        threads.ForEach(t => t.Join());
+        return (files.Length / clock.Elapsed.TotalSeconds, CpuClock.ProcessMs() - cpu);
     }
 
     /// <summary>Photos per second of the network alone: one thread per core on the one shared session.</summary>
@@ -155,24 +198,26 @@ internal static class IngestBench
         return threads.Count * perThread / clock.Elapsed.TotalSeconds;
     }
 
-    /// <summary>The real ingest (default workers, batch and channel) of <paramref name="tree"/> into a fresh index;
-    /// the rate over the embedding phase, as the ingest summary reports it.</summary>
-    private static double Ingest(string tree, string root, ImageEmbedder embedder, int expected)
+    /// <summary>The real ingest (default workers, batch and channel) of <paramref name="tree"/> into a fresh index:
+    /// the rate over the embedding phase, as the ingest summary reports it, and the process's CPU and wall time for the run.</summary>
+    private static (double Rate, double CpuMs, double WallMs) Ingest(string tree, string root, ImageEmbedder embedder, int expected)
     {
         string path = Fresh(Path.Combine(root, "speed.lookup"));
         IngestSummary summary;
+        double cpu = CpuClock.ProcessMs();
         using (var file = IndexFile.Open(path, IndexAccess.Write))
         {
             summary = new CatalogueIngest(file, embedder).Run(new IngestOptions { Root = tree });
         }
 
+        cpu = CpuClock.ProcessMs() - cpu;
         if (summary.Embedded != expected || summary.Failed != 0)
         {
             throw new InvalidOperationException($"{tree}: ingest embedded {summary.Embedded} of {expected} photos ({summary.Failed} failed); delete {root} and run again.");
         }
 
         Fresh(path);
-        return summary.PhotosPerSecond;
+        return (summary.PhotosPerSecond, cpu, summary.Elapsed.TotalMilliseconds);
     }
 
     /// <summary>A small ingest first, so the timed ingests do not pay for JIT compilation and the first index file.</summary>
@@ -259,6 +304,11 @@ internal static class IngestBench
     private static string Load() => File.ReadAllText("/proc/loadavg").Split(' ')[0];
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+
+    private readonly record struct Steps(double ReadHash, double DecodeResize, double HashThumbnail, double Inference)
+    {
+        public double Sum => ReadHash + DecodeResize + HashThumbnail + Inference;
+    }
 
     private sealed class Inline(Action<IngestProgress> report) : IProgress<IngestProgress>
     {
