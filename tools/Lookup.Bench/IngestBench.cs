@@ -18,7 +18,8 @@ namespace Lookup.Bench;
 /// bound also counts the read, hash, dHash and thumbnail a worker does, so "ingest ÷ all-work bound" says how
 /// much the pipeline itself (threads, channel, writer) loses.
 /// Memory: a child process ingests N small generated photos (640 × 480) into a fresh index and reports its peak
-/// working set (VmHWM). Options: --quick (fewer photos, one round, 1,000 photos for memory), --photos N (memory
+/// working set (VmHWM); 1,000 are drawn and the rest are byte copies (each still read, hashed, decoded, embedded,
+/// stored and inserted into the graph), because drawing and encoding a photo costs about as much CPU as ingesting it. Options: --quick (fewer photos, one round, 1,000 photos for memory), --photos N (memory
 /// set, default 10,000), --per-size N, --rounds N, --only speed|memory.
 /// </summary>
 internal static class IngestBench
@@ -231,9 +232,9 @@ internal static class IngestBench
     {
         string tree = Path.Combine(root, $"640x480-{photos}");
         var clock = Stopwatch.StartNew();
-        var files = SyntheticPhotos.Ensure(tree, 640, 480, photos, perSku: 4, quality: 85, seed: 7);
+        var files = SyntheticPhotos.Ensure(tree, 640, 480, photos, perSku: 4, quality: 85, seed: 7, distinct: 1_000);
         Console.WriteLine();
-        Console.WriteLine(Invariant($"memory: {files.Length:N0} JPEGs of 640 × 480 (mean {files.Take(200).Average(f => new FileInfo(f).Length) / 1e3:0} KB) ready in {clock.Elapsed.TotalSeconds:0} s; ingesting in a child process (default workers), load {Load()}"));
+        Console.WriteLine(Invariant($"memory: {files.Length:N0} JPEGs of 640 × 480 ({Math.Min(photos, 1_000):N0} drawn, the rest byte copies of them, each still read, decoded, embedded and stored; mean {files.Take(200).Average(f => new FileInfo(f).Length) / 1e3:0} KB) ready in {clock.Elapsed.TotalSeconds:0} s; ingesting in a child process (default workers), load {Load()}"));
         string index = Fresh(Path.Combine(root, "memory.lookup"));
         var info = SelfStart();
         info.ArgumentList.Add("ingest-memory-child");

@@ -10,6 +10,7 @@ namespace Lookup.Bench;
 ///   dotnet run -c Release --project tools/Lookup.Bench -- merge [--quick] [--parts 4]   (lookup merge of 100k stored vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- ingest [--quick] [--photos 10000] [--per-size 48] [--rounds 3] [--only speed|memory]
 ///   dotnet run -c Release --project tools/Lookup.Bench -- match-stages --index FILE --photo PHOTO [--crops dense]   (where one match's time goes)
+///   dotnet run -c Release --project tools/Lookup.Bench -- onnx-load [--runs 5]   (session open and inference per ORT optimisation level)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- prepare          (embeds and caches the bench vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- extract-fashion-mnist [--count 2000]
 /// </summary>
@@ -31,6 +32,7 @@ internal static class Program
             "merge" => MergeBench.Run(args),
             "ingest" => IngestBench.Run(args),
             "match-stages" => MatchStages.Run(args),
+            "onnx-load" => OnnxLoadBench.Run(args),
 
             "sweep" => SweepBench.Run(quick),
             "ingest-memory-child" => IngestBench.MemoryChild(args),
@@ -49,7 +51,7 @@ internal static class Program
 
     private static int Usage()
     {
-        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | ingest [--quick] [--photos N] [--per-size N] [--rounds N] [--only speed|memory] | match-stages --index FILE --photo PHOTO [--crops C] | sweep [--quick] | prepare | extract-fashion-mnist [--count N]");
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | ingest [--quick] [--photos N] [--per-size N] [--rounds N] [--only speed|memory] | match-stages --index FILE --photo PHOTO [--crops C] | onnx-load [--runs N] | sweep [--quick] | prepare | extract-fashion-mnist [--count N]");
         return 2;
     }
 }
