@@ -49,6 +49,22 @@ internal static class MatchStages
         using var query = prepared!;
         QueryPhoto[]? embedded = null;
         Stage(rows, $"embed {query.Regions.Length} regions on {workers} workers", () => embedded = CropEmbedding.Embed([query], model, workers));
+        var crops0 = embedded!.SelectMany(p => p.Crops).ToArray();
+        using (var fresh = MatchIndex.Open(index))
+        {
+            int hits = 0;
+            Stage(rows, $"search {crops0.Length} regions, k 32 (fresh index: cold node caches)", () =>
+                Parallel.For(0, crops0.Length, new ParallelOptions { MaxDegreeOfParallelism = workers }, i => Interlocked.Add(ref hits, fresh.Nearest(crops0[i], 32).Length)));
+            Stage(rows, "SKU lookups and exact scores after that search (SkuRanker.Rank, node caches warm)", () =>
+                new SkuRanker(fresh, fresh.Thresholds, new RankingOptions { Workers = workers }).Rank(embedded!, 5));
+        }
+
+        using (var fresh = MatchIndex.Open(index))
+        {
+            Stage(rows, "search and rank together (another fresh index)", () =>
+                new SkuRanker(fresh, fresh.Thresholds, new RankingOptions { Workers = workers }).Rank(embedded!, 5));
+        }
+
         MatchRun? run = null;
         Stage(rows, "whole match again (decode, embed, search, rank; warm)", () =>
             run = new PartMatcher(matchIndex, new PhotoDecoder()).MatchFiles([photo], new MatchRequest(5, crops, false, workers), () => model));
