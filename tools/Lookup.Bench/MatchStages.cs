@@ -55,6 +55,7 @@ internal static class MatchStages
             int hits = 0;
             Stage(rows, $"search {crops0.Length} regions, k 32 (fresh index: cold node caches)", () =>
                 Parallel.For(0, crops0.Length, new ParallelOptions { MaxDegreeOfParallelism = workers }, i => Interlocked.Add(ref hits, fresh.Nearest(crops0[i], 32).Length)));
+            rows.Add(Invariant($"| (that search read {fresh.VectorsRead:N0} node vectors and found {hits:N0} hits) | | |"));
             Stage(rows, "SKU lookups and exact scores after that search (SkuRanker.Rank, node caches warm)", () =>
                 new SkuRanker(fresh, fresh.Thresholds, new RankingOptions { Workers = workers }).Rank(embedded!, 5));
         }
