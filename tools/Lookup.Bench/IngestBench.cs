@@ -24,7 +24,8 @@ namespace Lookup.Bench;
 /// </summary>
 internal static class IngestBench
 {
-    private const double MemoryTargetMb = 1536;
+    /// <summary>The target, 1.5 GB, in MiB (VmHWM is reported in KiB).</summary>
+    private const double MemoryTargetMib = 1.5e9 / 1048576;
 
     public static int Run(string[] args)
     {
@@ -62,11 +63,11 @@ internal static class IngestBench
             if (p.Stage == "embedding" && tenth != lastTenth)
             {
                 lastTenth = tenth;
-                Console.Error.WriteLine($"  {p.Done:N0} / {p.Total:N0} photos, working set {Status("VmRSS")} MB, peak {Status("VmHWM")} MB, load {Load()}");
+                Console.Error.WriteLine($"  {p.Done:N0} / {p.Total:N0} photos, working set {Status("VmRSS")} MiB, peak {Status("VmHWM")} MiB, load {Load()}");
             }
         });
         var summary = new CatalogueIngest(file, embedder).Run(new IngestOptions { Root = root }, progress);
-        Console.WriteLine(Invariant($"embedded {summary.Embedded} failed {summary.Failed} seconds {summary.Elapsed.TotalSeconds:0.0} rate {summary.PhotosPerSecond:0.0} peak-mb {Status("VmHWM")} gc-heap-mb {GC.GetGCMemoryInfo().HeapSizeBytes / 1048576.0:0}"));
+        Console.WriteLine(Invariant($"embedded {summary.Embedded} failed {summary.Failed} seconds {summary.Elapsed.TotalSeconds:0.0} rate {summary.PhotosPerSecond:0.0} peak-mib {Status("VmHWM")} gc-heap-mib {GC.GetGCMemoryInfo().HeapSizeBytes / 1048576.0:0}"));
         return summary.Embedded > 0 && summary.Failed == 0 ? 0 : 1;
     }
 
@@ -247,17 +248,17 @@ internal static class IngestBench
         Fresh(index);
         var fields = result.Split(' ', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
         string Field(string name) => fields[Array.IndexOf(fields, name) + 1];
-        if (child.ExitCode != 0 || fields.Length < 14)
+        if (child.ExitCode != 0 || !fields.Contains("peak-mib"))
         {
             throw new InvalidOperationException($"the memory child exited with {child.ExitCode}: {result}");
         }
 
-        double peak = double.Parse(Field("peak-mb"), CultureInfo.InvariantCulture);
+        double peak = double.Parse(Field("peak-mib"), CultureInfo.InvariantCulture);
         Console.WriteLine();
-        Console.WriteLine("| photos | embedded | wall s | photos/s | peak working set MB | GC heap at end MB | target | load after |");
+        Console.WriteLine("| photos | embedded | wall s | photos/s | peak working set MiB | GC heap at end MiB | target | load after |");
         Console.WriteLine("| ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: |");
         Console.WriteLine(Invariant(
-            $"| {files.Length:N0} | {Field("embedded")} | {Field("seconds")} | {Field("rate")} | {peak:N0} | {Field("gc-heap-mb")} | ≤ {MemoryTargetMb:N0} MB: {(peak <= MemoryTargetMb ? "met" : "MISSED")} | {Load()} |"));
+            $"| {files.Length:N0} | {Field("embedded")} | {Field("seconds")} | {Field("rate")} | {peak:N0} | {Field("gc-heap-mib")} | ≤ 1.5 GB ({MemoryTargetMib:N0} MiB): {(peak <= MemoryTargetMib ? "met" : "MISSED")} | {Load()} |"));
     }
 
     private static ProcessStartInfo SelfStart()
@@ -273,7 +274,7 @@ internal static class IngestBench
         return info;
     }
 
-    /// <summary>A field of /proc/self/status in MB (VmHWM: peak resident set; VmRSS: now).</summary>
+    /// <summary>A field of /proc/self/status in MiB (VmHWM: peak resident set; VmRSS: now).</summary>
     private static string Status(string field)
     {
         string line = File.ReadLines("/proc/self/status").First(l => l.StartsWith(field + ":", StringComparison.Ordinal));
