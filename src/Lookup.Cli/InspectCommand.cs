@@ -68,7 +68,7 @@ internal static class InspectCommand
                 error.WriteLine($"lookup inspect: {e.Message}");
                 if (json)
                 {
-                    output.WriteLine(JsonSerializer.Serialize(new { photo = path, rejected = ReasonCode(e.Reason), message = e.Message }, Json));
+                    output.WriteLine(JsonSerializer.Serialize(new { photo = path, rejected = e.Reason.Code(), message = e.Message }, Json));
                 }
 
                 return ExitCodes.Failures;
@@ -147,10 +147,6 @@ internal static class InspectCommand
         8 => "rotated 90° anticlockwise on decode",
         _ => "stored upright",
     };
-
-    /// <summary>Stable kebab-case names for scripts: EmptyFile → empty-file.</summary>
-    internal static string ReasonCode(PhotoRejectionReason reason) =>
-        string.Concat(reason.ToString().Select((c, i) => i > 0 && char.IsUpper(c) ? "-" + char.ToLowerInvariant(c) : char.ToLowerInvariant(c).ToString()));
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }

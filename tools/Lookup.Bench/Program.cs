@@ -9,6 +9,9 @@ namespace Lookup.Bench;
 ///   dotnet run -c Release --project tools/Lookup.Bench -- crash-test [--rounds 8]   (kill -9 a writer, reopen, check)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- merge [--quick] [--parts 4]   (lookup merge of 100k stored vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- fuzz [--cases 20000] [--seed 1]   (byte-mutation fuzz of the photo decoder)
+///   dotnet run -c Release --project tools/Lookup.Bench -- ingest [--quick] [--photos 10000] [--per-size 48] [--rounds 3] [--only speed|memory]
+///   dotnet run -c Release --project tools/Lookup.Bench -- match-stages --index FILE --photo PHOTO [--crops dense]   (where one match's time goes)
+///   dotnet run -c Release --project tools/Lookup.Bench -- onnx-load [--runs 5]   (session open and inference per ORT optimisation level)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- prepare          (embeds and caches the bench vectors)
 ///   dotnet run -c Release --project tools/Lookup.Bench -- extract-fashion-mnist [--count 2000]
 /// </summary>
@@ -29,8 +32,12 @@ internal static class Program
             "crash-test" => CrashTest.Run(args),
             "merge" => MergeBench.Run(args),
             "fuzz" => FuzzBench.Run(args),
+            "ingest" => IngestBench.Run(args),
+            "match-stages" => MatchStages.Run(args),
+            "onnx-load" => OnnxLoadBench.Run(args),
 
             "sweep" => SweepBench.Run(quick),
+            "ingest-memory-child" => IngestBench.MemoryChild(args),
             "crash-writer" => CrashTest.Writer(args[1], int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture)),
             _ => Usage(),
         };
@@ -46,7 +53,7 @@ internal static class Program
 
     private static int Usage()
     {
-        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | fuzz [--cases N] [--seed S] | sweep [--quick] | prepare | extract-fashion-mnist [--count N]");
+        Console.Error.WriteLine("usage: Lookup.Bench graph [--quick] | params [--quick] | persisted | kernel | crash-test [--rounds N] | merge [--quick] [--parts N] | ingest [--quick] [--photos N] [--per-size N] [--rounds N] [--only speed|memory] | match-stages --index FILE --photo PHOTO [--crops C] | onnx-load [--runs N] | fuzz [--cases N] [--seed S] | sweep [--quick] | prepare | extract-fashion-mnist [--count N]");
         return 2;
     }
 }

@@ -39,6 +39,9 @@ internal sealed class MatchIndex : IMatchCatalogue, IDisposable
     /// <summary>Indexed photos in the graph.</summary>
     public int LivePhotos => _graph.LiveCount;
 
+    /// <summary>Graph node vectors read from the file so far (benchmarks: how much of the graph a match touched).</summary>
+    internal int VectorsRead => _graph.VectorsLoaded;
+
     /// <summary>The fingerprint of the model the graph was built with.</summary>
     public string ModelFingerprint => _graph.ModelFingerprint;
 

@@ -38,7 +38,7 @@ internal sealed class PartMatcher(MatchIndex index, PhotoDecoder decoder, Rankin
                 }
                 catch (PhotoRejectedException e)
                 {
-                    failures[i] = new QueryFailure(paths[i], ReasonCode(e.Reason), e.Message);
+                    failures[i] = new QueryFailure(paths[i], e.Reason.Code(), e.Message);
                 }
             });
 
@@ -82,8 +82,4 @@ internal sealed class PartMatcher(MatchIndex index, PhotoDecoder decoder, Rankin
 
     private SkuRanker Ranker(MatchRequest request) =>
         new(index, index.Thresholds, _ranking with { Workers = request.Workers });
-
-    /// <summary>Stable kebab-case names for scripts: EmptyFile → empty-file.</summary>
-    internal static string ReasonCode(PhotoRejectionReason reason) =>
-        string.Concat(reason.ToString().Select((c, i) => i > 0 && char.IsUpper(c) ? "-" + char.ToLowerInvariant(c) : char.ToLowerInvariant(c).ToString()));
 }

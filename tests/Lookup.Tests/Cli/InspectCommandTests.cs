@@ -2,7 +2,6 @@ using System.CommandLine;
 using System.Text.Json;
 using Lookup.Cli;
 using Lookup.Embedding;
-using Lookup.Imaging;
 using Lookup.Tests.Imaging;
 using SixLabors.ImageSharp;
 using SixLabors.ImageSharp.Metadata.Profiles.Exif;
@@ -99,13 +98,6 @@ public sealed class InspectCommandTests : IDisposable
         Assert.Contains("lookup inspect photos/4471-B/front.jpg --json", output, StringComparison.Ordinal);
         Assert.Contains("Exit codes: 0 ok, 1 photo rejected or model not loadable", output, StringComparison.Ordinal);
     }
-
-    [Theory]
-    [InlineData(PhotoRejectionReason.EmptyFile, "empty-file")]
-    [InlineData(PhotoRejectionReason.TooManyPixels, "too-many-pixels")]
-    [InlineData(PhotoRejectionReason.Corrupt, "corrupt")]
-    public void ReasonCode_is_kebab_case(PhotoRejectionReason reason, string expected) =>
-        Assert.Equal(expected, InspectCommand.ReasonCode(reason));
 
     public void Dispose() => photos.Dispose();
 
