@@ -18,7 +18,8 @@ namespace Lookup.Sweeps;
 /// <see cref="FinishMatchMaxDifference"/>). This catches a part filed under the same shape in another finish (a black
 /// bracket under the zinc one), which can sit right in the middle of its SKU by distance: the network barely tells
 /// finishes apart. Needs a SKU of three or more (two siblings that agree), and is skipped when more than half of the
-/// SKU would be candidates.
+/// SKU would be candidates. The same evidence also withdraws a distance flag when the photo has its own SKU's
+/// finish and plainly not the other SKU's.
 /// </para>
 /// Cost: O(k² · dim) for a SKU of k ≤ 256 photos; larger SKUs are screened by the distance to the mean of the
 /// others (O(k · dim)), then each candidate's nearest own photo is found exactly.
@@ -61,7 +62,7 @@ internal static class SkuOutliers
             (s, _, buffer) =>
             {
                 var reported = new HashSet<int>();
-                foreach (var finding in InSku(photos, indexOfId, source, options, skus[s], buffer, reported))
+                foreach (var finding in InSku(photos, indexOfId, source, options, skus[s], buffer, reported, finishes))
                 {
                     found.Add(finding);
                 }
@@ -87,7 +88,8 @@ internal static class SkuOutliers
         SweepOptions options,
         int[] members,
         List<SweepNeighbour> buffer,
-        HashSet<int> reported)
+        HashSet<int> reported,
+        IReadOnlyList<FinishSignature?>? finishes)
     {
         var k = members.Length;
         var screen = k <= ExactLimit ? NearestOwn(photos, members) : DistanceToRest(photos, members);
@@ -104,7 +106,7 @@ internal static class SkuOutliers
         {
             var (own, ownDistance) = NearestAmong(photos, members[i], members);
             var (other, otherDistance) = NearestOtherSku(photos, indexOfId, source, members[i], Math.Min(ownDistance, options.OutlierSearchRadius), buffer);
-            if (other >= 0 && otherDistance < ownDistance)
+            if (other >= 0 && otherDistance < ownDistance && !FinishSaysOwn(finishes, members[i], own, other))
             {
                 flagged.Add((members[i], own, ownDistance, other, otherDistance));
             }
@@ -118,6 +120,19 @@ internal static class SkuOutliers
         reported.UnionWith(flagged.Select(f => f.Member));
         return [.. flagged.Select(f => Build(photos, f.Member, f.Own, f.OwnDistance, f.Other, f.OtherDistance, spread))];
     }
+
+    /// <summary>
+    /// True when the finishes are known and speak against a move: the photo has its own SKU's finish (difference at
+    /// most <see cref="FinishMatchMaxDifference"/> to its nearest own photo) and not the other SKU's (at least
+    /// <see cref="FinishMinDifference"/> from that photo), e.g. a brass gear that is merely nearer to the black one.
+    /// </summary>
+    private static bool FinishSaysOwn(IReadOnlyList<FinishSignature?>? finishes, int member, int own, int other) =>
+        finishes is not null
+        && finishes[member] is { } finish
+        && finishes[own] is { } ownFinish
+        && finishes[other] is { } otherFinish
+        && finish.DifferenceTo(ownFinish) <= FinishMatchMaxDifference
+        && finish.DifferenceTo(otherFinish) >= FinishMinDifference;
 
     private static List<SweepFinding> FinishOutliers(
         IReadOnlyList<SweepPhoto> photos,
