@@ -18,8 +18,8 @@ namespace Lookup.Sweeps;
 /// <see cref="FinishMatchMaxDifference"/>). This catches a part filed under the same shape in another finish (a black
 /// bracket under the zinc one), which can sit right in the middle of its SKU by distance: the network barely tells
 /// finishes apart. Needs a SKU of three or more (two siblings that agree), and is skipped when more than half of the
-/// SKU would be candidates. The same evidence also withdraws a distance flag when the photo has its own SKU's
-/// finish and plainly not the other SKU's.
+/// SKU would be candidates. The same evidence also withdraws a distance flag when the photo's finish is plainly not
+/// the other SKU's and much closer to its own SKU's.
 /// </para>
 /// Cost: O(k² · dim) for a SKU of k ≤ 256 photos; larger SKUs are screened by the distance to the mean of the
 /// others (O(k · dim)), then each candidate's nearest own photo is found exactly.
@@ -106,7 +106,7 @@ internal static class SkuOutliers
         {
             var (own, ownDistance) = NearestAmong(photos, members[i], members);
             var (other, otherDistance) = NearestOtherSku(photos, indexOfId, source, members[i], Math.Min(ownDistance, options.OutlierSearchRadius), buffer);
-            if (other >= 0 && otherDistance < ownDistance && !FinishSaysOwn(finishes, members[i], own, other))
+            if (other >= 0 && otherDistance < ownDistance && !FinishSaysOwn(finishes, members[i], members, other))
             {
                 flagged.Add((members[i], own, ownDistance, other, otherDistance));
             }
@@ -122,17 +122,21 @@ internal static class SkuOutliers
     }
 
     /// <summary>
-    /// True when the finishes are known and speak against a move: the photo has its own SKU's finish (difference at
-    /// most <see cref="FinishMatchMaxDifference"/> to its nearest own photo) and not the other SKU's (at least
-    /// <see cref="FinishMinDifference"/> from that photo), e.g. a brass gear that is merely nearer to the black one.
+    /// True when the finishes are known and speak against a move: the photo's finish is at least
+    /// <see cref="FinishMinDifference"/> from the other SKU's photo and less than half as far from some photo of its
+    /// own SKU, e.g. a brass gear that is merely nearer to the black one.
     /// </summary>
-    private static bool FinishSaysOwn(IReadOnlyList<FinishSignature?>? finishes, int member, int own, int other) =>
-        finishes is not null
-        && finishes[member] is { } finish
-        && finishes[own] is { } ownFinish
-        && finishes[other] is { } otherFinish
-        && finish.DifferenceTo(ownFinish) <= FinishMatchMaxDifference
-        && finish.DifferenceTo(otherFinish) >= FinishMinDifference;
+    private static bool FinishSaysOwn(IReadOnlyList<FinishSignature?>? finishes, int member, int[] members, int other)
+    {
+        if (finishes?[member] is not { } finish || finishes[other] is not { } otherFinish)
+        {
+            return false;
+        }
+
+        var toOther = finish.DifferenceTo(otherFinish);
+        var toOwn = members.Where(m => m != member && finishes[m] is not null).Select(m => finish.DifferenceTo(finishes[m]!)).DefaultIfEmpty(double.MaxValue).Min();
+        return toOther >= FinishMinDifference && toOwn < toOther / 2;
+    }
 
     private static List<SweepFinding> FinishOutliers(
         IReadOnlyList<SweepPhoto> photos,
