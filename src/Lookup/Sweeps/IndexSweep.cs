@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using Lookup.Graph;
+using Lookup.Imaging;
 using Lookup.Store;
 
 namespace Lookup.Sweeps;
@@ -46,6 +47,7 @@ public static partial class IndexSweep
             new GraphNeighbourSource(snapshot.Graph),
             snapshot.Options with { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism },
             thumbnails: null,
+            FinishesOnDisk(snapshot.CatalogueRoot),
             clock,
             cancellationToken);
         var decided = full.Filtered(snapshot.Decisions, previousKeys: null);
@@ -64,6 +66,40 @@ public static partial class IndexSweep
         return new IndexSweepResult(
             reported, newKeys, snapshot.Previous, number, notStored, snapshot.CatalogueRoot, snapshot.WithoutSku,
             snapshot.WithoutNode, readTime, sweepTime, watch.Elapsed - readTime - sweepTime);
+    }
+
+    /// <summary>
+    /// Measures each photo's finish from its file under the catalogue root (decoded within the default
+    /// <see cref="PhotoLimits"/>), or gives none when the root is unknown; a file that is gone or cannot be decoded
+    /// has no finish and is left out of the finish check. Cost: one decode per photo per sweep (about 3 ms for a
+    /// 384 × 384 JPEG).
+    /// </summary>
+    private static FinishSource? FinishesOnDisk(string? catalogueRoot)
+    {
+        if (catalogueRoot is null || !Directory.Exists(catalogueRoot))
+        {
+            return null;
+        }
+
+        var decoder = new PhotoDecoder();
+        return photo =>
+        {
+            var path = Path.Combine(catalogueRoot, photo.Path.Replace('/', Path.DirectorySeparatorChar));
+            if (!File.Exists(path))
+            {
+                return null;
+            }
+
+            try
+            {
+                using var decoded = decoder.Decode(path);
+                return FinishSignature.Of(decoded.Image);
+            }
+            catch (PhotoRejectedException)
+            {
+                return null;
+            }
+        };
     }
 
     /// <summary>

@@ -6,4 +6,6 @@ namespace Lookup.Sweeps;
 /// a SKU of two photos, which has none.</param>
 /// <param name="NearestOtherSku">The SKU of the nearest photo outside its own SKU.</param>
 /// <param name="DistanceToOtherSku">Distance to that photo.</param>
-public sealed record OutlierEvidence(float DistanceToOwnSku, float? OwnSkuSpread, string NearestOtherSku, float DistanceToOtherSku);
+/// <param name="FinishDifference">Set when the photo was flagged by its finish (<see cref="FinishSignature"/>): its
+/// finish difference to the nearest in finish of the other photos of its SKU; that other SKU's photo has its finish.</param>
+public sealed record OutlierEvidence(float DistanceToOwnSku, float? OwnSkuSpread, string NearestOtherSku, float DistanceToOtherSku, double? FinishDifference = null);

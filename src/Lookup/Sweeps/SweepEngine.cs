@@ -17,6 +17,8 @@ public static class SweepEngine
     /// <param name="options">Thresholds; defaults when null.</param>
     /// <param name="thumbnails">Makes a thumbnail for a photo that has none stored; without it such pairs are judged
     /// by the dHash alone.</param>
+    /// <param name="finishes">Measures the finish of a photo's part for the finish check of <see cref="SkuOutliers"/>;
+    /// without it only distances flag a photo filed under the wrong SKU.</param>
     /// <param name="clock">The clock for the report's times; the system clock when null.</param>
     /// <param name="cancellationToken">Stops the sweep between pairs.</param>
     public static SweepReport Run(
@@ -24,6 +26,7 @@ public static class SweepEngine
         INeighbourSource neighbours,
         SweepOptions? options = null,
         ThumbnailSource? thumbnails = null,
+        FinishSource? finishes = null,
         TimeProvider? clock = null,
         CancellationToken cancellationToken = default)
     {
@@ -68,7 +71,14 @@ public static class SweepEngine
 
         var findings = FindingBuilder.Partition(true, members, samePhoto);
         findings.AddRange(FindingBuilder.Partition(false, members, lookAlike));
-        findings.AddRange(SkuOutliers.Find(photos, indexOfId, neighbours, options, parallel));
+        FinishSignature?[]? finish = null;
+        if (finishes is not null)
+        {
+            finish = new FinishSignature?[photos.Count];
+            Parallel.For(0, photos.Count, parallel, i => finish[i] = finishes(photos[i]));
+        }
+
+        findings.AddRange(SkuOutliers.Find(photos, indexOfId, neighbours, options, parallel, finish));
 
         var counts = new SweepCounts
         {

@@ -36,6 +36,17 @@ public static class Verdicts
     {
         ArgumentNullException.ThrowIfNull(flagged);
         ArgumentNullException.ThrowIfNull(evidence);
+        if (evidence.FinishDifference is { } finish)
+        {
+            return string.Create(
+                CultureInfo.InvariantCulture,
+                $"The part in this photo has another finish (colour and brightness) than every other photo of SKU " +
+                $"\"{flagged.Sku}\" (finish difference {finish:0.0}; photos of one SKU usually differ by less than 1) and " +
+                $"the finish of SKU \"{evidence.NearestOtherSku}\", whose photo is also closer ({evidence.DistanceToOtherSku:0.000} " +
+                $"against {evidence.DistanceToOwnSku:0.000} to its own SKU): it may be filed under the wrong SKU. Check the " +
+                $"part in the photo against both SKUs before moving it. {SafetyNotice}");
+        }
+
         return string.Create(
             CultureInfo.InvariantCulture,
             $"This photo is far from the rest of SKU \"{flagged.Sku}\" (distance {evidence.DistanceToOwnSku:0.000}) and " +

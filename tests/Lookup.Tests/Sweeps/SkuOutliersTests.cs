@@ -89,12 +89,86 @@ public sealed class SkuOutliersTests
         Assert.Equal("X/1000", finding.Members.Single(m => m.Role == MemberRole.Flagged).Path);
     }
 
-    private static List<SweepFinding> Find(List<SweepPhoto> photos) => SkuOutliers.Find(
+    // Finishes as FinishSignature measures them; zinc and black oxide values as measured on the demo catalogue's
+    // studio photos (DEVELOPERS.md § Sweeps), brass well apart from both.
+    private static readonly FinishSignature Zinc = new(0.05, 0.02, -0.4);
+    private static readonly FinishSignature BlackOxide = new(0.03, -0.005, -0.8);
+    private static readonly FinishSignature Brass = new(-0.35, -0.09, -0.3);
+
+    [Fact]
+    public void Find_flags_a_photo_in_the_middle_of_its_sku_whose_finish_is_another_skus_and_that_sku_is_nearer()
+    {
+        // X: four photos about 0.2 apart. x4 lies 0.05 from y1, nearer than its own photos but well inside X's spread,
+        // so distances alone never flag it; its finish is Y's.
+        var vx = SweepFixtures.RandomUnit(_random);
+        var x4 = SweepFixtures.Near(vx, 0.1, _random);
+        var y1 = SweepFixtures.Near(x4, 0.05, _random);
+        var photos = new List<SweepPhoto>
+        {
+            Photo(1, "X", SweepFixtures.Near(vx, 0.1, _random)),
+            Photo(2, "X", SweepFixtures.Near(vx, 0.1, _random)),
+            Photo(3, "X", SweepFixtures.Near(vx, 0.1, _random)),
+            Photo(4, "X", x4),
+            Photo(5, "Y", y1),
+            Photo(6, "Y", SweepFixtures.Near(y1, 0.02, _random)),
+        };
+        FinishSignature[] finishes = [Zinc, Zinc, Zinc, BlackOxide, BlackOxide, BlackOxide];
+
+        Assert.Empty(Find(photos));
+        var finding = Assert.Single(Find(photos, finishes));
+
+        Assert.Equal("X/4", finding.Members.Single(m => m.Role == MemberRole.Flagged).Path);
+        Assert.Equal("Y", finding.Outlier!.NearestOtherSku);
+        Assert.True(finding.Outlier.FinishDifference >= SkuOutliers.FinishMinDifference, $"{finding.Outlier.FinishDifference}");
+        Assert.Contains("another finish", finding.Verdict, StringComparison.Ordinal);
+        Assert.Empty(Find(photos, [Zinc, Zinc, Zinc, Zinc, BlackOxide, BlackOxide]));
+    }
+
+    [Fact]
+    public void Find_does_not_flag_a_photo_whose_finish_differs_when_the_nearer_sku_has_a_third_finish()
+    {
+        var vx = SweepFixtures.RandomUnit(_random);
+        var x4 = SweepFixtures.Near(vx, 0.1, _random);
+        var y1 = SweepFixtures.Near(x4, 0.05, _random);
+        var photos = new List<SweepPhoto>
+        {
+            Photo(1, "X", SweepFixtures.Near(vx, 0.1, _random)),
+            Photo(2, "X", SweepFixtures.Near(vx, 0.1, _random)),
+            Photo(3, "X", SweepFixtures.Near(vx, 0.1, _random)),
+            Photo(4, "X", x4),
+            Photo(5, "Y", y1),
+            Photo(6, "Y", SweepFixtures.Near(y1, 0.02, _random)),
+        };
+
+        Assert.Empty(Find(photos, [Zinc, Zinc, Zinc, BlackOxide, Brass, Brass]));
+    }
+
+    [Fact]
+    public void Find_withdraws_a_distance_flag_when_the_photo_has_its_own_skus_finish_and_plainly_not_the_other()
+    {
+        // As in the first test: x2 sits 0.1 from SKU Y, x1 has nothing near; but x2 is zinc like x1 and Y is brass.
+        var vx = SweepFixtures.RandomUnit(_random);
+        var vy = SweepFixtures.RandomUnit(_random);
+        var photos = new List<SweepPhoto>
+        {
+            Photo(1, "X", vx),
+            Photo(2, "X", SweepFixtures.Near(vy, 0.1, _random)),
+            Photo(3, "Y", vy),
+            Photo(4, "Y", SweepFixtures.Near(vy, 0.02, _random)),
+        };
+
+        Assert.Single(Find(photos));
+        Assert.Single(Find(photos, [Zinc, Zinc, Zinc, Zinc]));
+        Assert.Empty(Find(photos, [Zinc, Zinc, Brass, Brass]));
+    }
+
+    private static List<SweepFinding> Find(List<SweepPhoto> photos, FinishSignature?[]? finishes = null) => SkuOutliers.Find(
         photos,
         photos.Select((p, i) => (p.Id, i)).ToDictionary(x => x.Id, x => x.i),
         new ExactNeighbourSource(photos),
         new SweepOptions(),
-        new ParallelOptions());
+        new ParallelOptions(),
+        finishes);
 
     private static SweepPhoto Photo(int id, string sku, float[] v) =>
         new(id, sku, $"{sku}/{id}", $"{id:x64}", 0, 100, 100, 1000, v);
