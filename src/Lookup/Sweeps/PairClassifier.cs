@@ -88,7 +88,11 @@ internal sealed class PairClassifier
         {
             var detail = _detail.Correlate(container.Detail, PhotoShape.Of(container), content.Detail, PhotoShape.Of(content), best.Hypothesis);
             evidence = evidence with { DetailCorrelation = detail };
-            if (detail < (searched ? _options.AlignedMinDetailCorrelation : _options.WholeFrameMinDetailCorrelation))
+            // A searched placement that is a whole frame up to the search's rounding claims no crop or turn, so it
+            // meets the whole-frame bar: two scale models of one part (M6 × 30 and M8 × 40 bolts) align that way.
+            var h = best.Hypothesis;
+            var wholeFrame = !searched || (SameAspect(a, b) && h.Scale >= 0.97f && Math.Abs(h.AngleDegrees) < 1f);
+            if (detail < (wholeFrame ? _options.WholeFrameMinDetailCorrelation : _options.AlignedMinDetailCorrelation))
             {
                 return (false, evidence);
             }
