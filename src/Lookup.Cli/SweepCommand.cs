@@ -187,7 +187,8 @@ internal static partial class SweepCommand
                 var previews = CataloguePreviews.Prepare(
                     result.CatalogueRoot, result.Report.Findings, maxDegreeOfParallelism: request.Threads, cancellationToken: cancellationToken);
                 WriteAtomically(request.Report, writer => SweepHtmlWriter.Write(
-                    result.Report, writer, previews, caption: Caption(request, result), newKeys: result.NewKeys));
+                    result.Report, writer, previews, caption: Caption(request, result), newKeys: result.NewKeys,
+                    calibration: result.Calibration));
             }
 
             if (request.Csv == "-")

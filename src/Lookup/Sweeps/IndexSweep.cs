@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using Lookup.Calibration;
 using Lookup.Graph;
 using Lookup.Store;
 
@@ -63,7 +64,10 @@ public static partial class IndexSweep
 
         return new IndexSweepResult(
             reported, newKeys, snapshot.Previous, number, notStored, snapshot.CatalogueRoot, snapshot.WithoutSku,
-            snapshot.WithoutNode, readTime, sweepTime, watch.Elapsed - readTime - sweepTime);
+            snapshot.WithoutNode, readTime, sweepTime, watch.Elapsed - readTime - sweepTime)
+        {
+            Calibration = snapshot.Calibration,
+        };
     }
 
     /// <summary>
@@ -117,7 +121,8 @@ public static partial class IndexSweep
         IReadOnlySet<string> PreviousKeys,
         string? CatalogueRoot,
         int WithoutSku,
-        int WithoutNode)
+        int WithoutNode,
+        CalibrationRecord? Calibration)
     {
         public static Snapshot Read(string indexPath, IndexSweepOptions options)
         {
@@ -135,7 +140,8 @@ public static partial class IndexSweep
                 previous is null ? new HashSet<string>() : sweeps.KeysOf(previous.Number),
                 CatalogueSettings.Read(file)?.CatalogueRoot,
                 withoutSku,
-                withoutNode);
+                withoutNode,
+                ReferenceEquals(VerdictThresholds.ReadOrDefault(file), VerdictThresholds.Default) ? null : CalibrationRecord.Read(file));
         }
     }
 }
