@@ -17,7 +17,14 @@ internal static class Program
 
     internal static RootCommand CreateRootCommand()
     {
-        var root = new RootCommand("Lookup: identify parts from photos against a catalogue and keep the catalogue free of duplicates.");
+        var root = new RootCommand(
+            """
+            Lookup: identify parts from photos against a catalogue and keep the catalogue free of duplicates.
+
+            Example:
+              lookup demo                                     a tour on the invented demo catalogue (about a minute)
+              lookup ingest /srv/photos --index parts.lookup  then match, sweep: see lookup COMMAND --help
+            """);
         root.Subcommands.Add(InspectCommand.Create());
         root.Subcommands.Add(IngestCommand.Create());
         root.Subcommands.Add(CalibrateCommand.Create());
@@ -26,6 +33,7 @@ internal static class Program
         root.Subcommands.Add(SweepCommand.Create());
         root.Subcommands.Add(DismissCommand.Create());
         root.Subcommands.Add(MatchCommand.Create());
+        root.Subcommands.Add(DemoCommand.Create());
         return root;
     }
 }

@@ -184,11 +184,7 @@ internal static partial class SweepCommand
             if (request.Report is not null)
             {
                 progress.Report($"writing {request.Report}");
-                var previews = CataloguePreviews.Prepare(
-                    result.CatalogueRoot, result.Report.Findings, maxDegreeOfParallelism: request.Threads, cancellationToken: cancellationToken);
-                WriteAtomically(request.Report, writer => SweepHtmlWriter.Write(
-                    result.Report, writer, previews, caption: Caption(request, result), newKeys: result.NewKeys,
-                    calibration: result.Calibration));
+                WriteHtmlReport(request.Report, result, Caption(request, result), request.Threads, cancellationToken);
             }
 
             if (request.Csv == "-")
@@ -207,6 +203,17 @@ internal static partial class SweepCommand
             error.WriteLine($"lookup sweep: could not write a report: {e.Message} Check the folder exists and is writable.");
             return false;
         }
+    }
+
+    /// <summary>Writes the self-contained HTML page of a sweep, previews read from the catalogue root (also used by
+    /// <c>lookup demo</c>).</summary>
+    /// <exception cref="IOException">The file could not be written.</exception>
+    internal static void WriteHtmlReport(string path, IndexSweepResult result, string caption, int threads, CancellationToken cancellationToken)
+    {
+        var previews = CataloguePreviews.Prepare(
+            result.CatalogueRoot, result.Report.Findings, maxDegreeOfParallelism: threads, cancellationToken: cancellationToken);
+        WriteAtomically(path, writer => SweepHtmlWriter.Write(
+            result.Report, writer, previews, caption: caption, newKeys: result.NewKeys, calibration: result.Calibration));
     }
 
     /// <summary>Writes to a temporary file beside <paramref name="path"/> and moves it into place, so a reader never
