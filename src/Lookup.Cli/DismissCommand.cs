@@ -5,7 +5,8 @@ using Lookup.Sweeps;
 
 namespace Lookup.Cli;
 
-/// <summary><c>lookup dismiss --index FILE KEY | --pair PATH PATH | --from FILE</c>: record "not a duplicate".</summary>
+/// <summary><c>lookup dismiss --index FILE KEY | --pair PATH PATH | --from FILE | --list | --undo KEY</c>: record, show or
+/// take back "not a duplicate".</summary>
 internal static class DismissCommand
 {
     public static Command Create()
@@ -33,6 +34,11 @@ internal static class DismissCommand
             DefaultValueFactory = _ => Environment.UserName,
         };
         var json = new Option<bool>("--json") { Description = "Print the outcome of each decision as JSON." };
+        var list = new Option<bool>("--list") { Description = "Show the decisions recorded in the index (key, finding or pair, who, when, photos, note) and record nothing." };
+        var undo = new Option<string?>("--undo")
+        {
+            Description = "Take back the decision with this key (from --list; a unique prefix of at least 8 hex digits). A finding's pair decisions go with it.",
+        };
         var command = new Command(
             "dismiss",
             """
@@ -44,13 +50,25 @@ internal static class DismissCommand
               lookup dismiss --index parts.lookup 3f9a2c1b7d0e --note "left and right hand parts"
               lookup dismiss --index parts.lookup --pair 4471-B/front.jpg 4471-C/front.jpg
               lookup dismiss --index parts.lookup --from reviewed.csv
+              lookup dismiss --index parts.lookup --list
+              lookup dismiss --index parts.lookup --undo 3f9a2c1b7d0e
 
-            Exit codes: 0 all recorded (or already recorded), 1 some key or path not found or the index busy, 2 usage error.
+            Exit codes: 0 all recorded (or already recorded, or listed, or taken back), 1 some key or path not found or the
+            index busy, 2 usage error.
             """)
         {
-            index, keys, pair, from, note, reviewer, json,
+            index, keys, pair, from, note, reviewer, json, list, undo,
         };
-        command.SetAction(parseResult => Run(
+        command.SetAction(parseResult => parseResult.GetValue(list) || parseResult.GetValue(undo) is not null
+            ? Review(
+                parseResult.GetValue(index)!,
+                parseResult.GetValue(list),
+                parseResult.GetValue(undo),
+                (parseResult.GetValue(keys) ?? []).Length > 0 || parseResult.GetValue(pair) is { Length: > 0 } || parseResult.GetValue(from) is not null,
+                parseResult.GetValue(json),
+                parseResult.InvocationConfiguration.Output,
+                parseResult.InvocationConfiguration.Error)
+            : Run(
             parseResult.GetValue(index)!,
             parseResult.GetValue(keys) ?? [],
             parseResult.GetValue(pair),
@@ -156,6 +174,90 @@ internal static class DismissCommand
         }
 
         return outcomes.Any(o => o.Failed) || problems.Count > 0 ? ExitCodes.Failures : ExitCodes.Success;
+    }
+
+    /// <summary>--list or --undo: show the decisions, or take one back.</summary>
+    private static int Review(string indexPath, bool list, string? undo, bool recordsToo, bool json, TextWriter output, TextWriter error)
+    {
+        if (recordsToo || (list && undo is not null))
+        {
+            error.WriteLine("lookup dismiss: --list and --undo each go alone (no keys, --pair or --from with them, nor both together).");
+            return ExitCodes.Usage;
+        }
+
+        if (!File.Exists(indexPath))
+        {
+            error.WriteLine($"lookup dismiss: {Path.GetFullPath(indexPath)} does not exist: check the --index path.");
+            return ExitCodes.Failures;
+        }
+
+        try
+        {
+            if (list)
+            {
+                using var reader = IndexFile.Open(indexPath, IndexAccess.Read);
+                WriteList(new DecisionStore(reader).All(), indexPath, json, output);
+                return ExitCodes.Success;
+            }
+
+            using var file = IndexFile.Open(indexPath, IndexAccess.Write);
+            var outcome = DecisionUndo.Undo(file, undo!);
+            if (json)
+            {
+                output.WriteLine(JsonSerializer.Serialize(
+                    new { index = indexPath, status = outcome.Status, decision = outcome.Decision, pairsRestored = outcome.PairsRestored, message = outcome.Message },
+                    SweepJsonWriter.Options));
+            }
+            else
+            {
+                output.WriteLine(outcome.Message);
+            }
+
+            return outcome.Status == UndoStatus.Undone ? ExitCodes.Success : ExitCodes.Failures;
+        }
+        catch (IndexFileException e)
+        {
+            error.WriteLine($"lookup dismiss: {e.Message}");
+            return ExitCodes.Failures;
+        }
+    }
+
+    private static void WriteList(IReadOnlyList<ReviewerDecision> decisions, string indexPath, bool json, TextWriter output)
+    {
+        if (json)
+        {
+            output.WriteLine(JsonSerializer.Serialize(new { index = indexPath, decisions }, SweepJsonWriter.Options));
+            return;
+        }
+
+        if (decisions.Count == 0)
+        {
+            output.WriteLine($"{indexPath} holds no decisions.");
+            return;
+        }
+
+        // Pair decisions recorded with a finding's decision are counted under it, not listed one by one.
+        var withFinding = decisions.Where(d => d.ViaFinding is not null).GroupBy(d => d.ViaFinding!).ToDictionary(g => g.Key, g => g.Count());
+        var shown = decisions.Where(d => d.ViaFinding is null || !decisions.Any(f => f.Key == d.ViaFinding)).ToList();
+        var rows = shown.Select(d => new[]
+        {
+            d.Key[..Math.Min(12, d.Key.Length)],
+            d.Target == DecisionTarget.Finding ? $"finding ({withFinding.GetValueOrDefault(d.Key)} pairs)" : "pair",
+            d.Reviewer,
+            d.DecidedUtc.ToString("yyyy-MM-dd HH:mm", System.Globalization.CultureInfo.InvariantCulture),
+            string.Join(" / ", d.Paths.Take(3)) + (d.Paths.Count > 3 ? $" (+{d.Paths.Count - 3})" : ""),
+            d.Note,
+        }).ToList();
+        string[] header = ["key", "what", "reviewer", "decided (UTC)", "photos", "note"];
+        var widths = header.Select((h, i) => Math.Max(h.Length, rows.Max(r => r[i].Length))).ToArray();
+        output.WriteLine(string.Join("  ", header.Select((h, i) => h.PadRight(widths[i]))).TrimEnd());
+        output.WriteLine(string.Join("  ", widths.Select(w => new string('-', w))));
+        foreach (var row in rows)
+        {
+            output.WriteLine(string.Join("  ", row.Select((c, i) => c.PadRight(widths[i]))).TrimEnd());
+        }
+
+        output.WriteLine($"{shown.Count} decisions. Take one back with lookup dismiss --index {indexPath} --undo KEY.");
     }
 
     private static string Status(DismissStatus status) => status switch

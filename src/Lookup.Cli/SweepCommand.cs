@@ -212,7 +212,8 @@ internal static partial class SweepCommand
     {
         var previews = CataloguePreviews.Prepare(
             result.CatalogueRoot, result.Report.Findings, maxDegreeOfParallelism: threads, cancellationToken: cancellationToken);
-        WriteAtomically(path, writer => SweepHtmlWriter.Write(result.Report, writer, previews, caption: caption, newKeys: result.NewKeys));
+        WriteAtomically(path, writer => SweepHtmlWriter.Write(
+            result.Report, writer, previews, caption: caption, newKeys: result.NewKeys, calibration: result.Calibration));
     }
 
     /// <summary>Writes to a temporary file beside <paramref name="path"/> and moves it into place, so a reader never

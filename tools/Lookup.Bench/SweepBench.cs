@@ -12,9 +12,10 @@ namespace Lookup.Bench;
 /// Vectors as the graph bench makes them: real ResNet18 embeddings of Fashion-MNIST (full: the 10,000 cached training
 /// images, see `prepare`; quick: the 2,000 committed test images) repeated with N(0, 0.01²) noise per component and
 /// renormalised, so each source gives 10 (quick: 5) photos about 0.05 apart, filed as views of one SKU. Every
-/// photo gets its own smooth random 32 × 32 thumbnail, so views are different pictures and every view pair within the
+/// photo gets its own smooth random 32 × 32 thumbnail (with the 64 × 64 detail and 32 × 32 colour planes drawn from
+/// the same random grids), so views are different pictures and every view pair within the
 /// crop distance goes through the crop search (the costly case); half the photos are 1000 × 1000, half 480 × 360.
-/// Planted: 1 % of photos are replaced by a copy of the photo before them (vector about 0.01 away, thumbnail
+/// Planted: 1 % of photos are replaced by a copy of the photo before them (vector about 0.01 away, thumbnail and detail
 /// brightened, a quarter byte-identical), half under the original's SKU and half under their own.
 /// <para>
 /// Two sets. "centred": the sources are the embeddings minus their mean, renormalised, before the noise. Fashion-MNIST
@@ -34,6 +35,7 @@ internal static class SweepBench
     private const double TargetSeconds = 120;
     private const int PlantEvery = 100;
     private const int RawSample = 100;
+    private const int Grid = 5;
 
     public static int Run(bool quick)
     {
@@ -54,7 +56,8 @@ internal static class SweepBench
 
     private static string Index(string name, float[][] sources, int copiesPerSource)
     {
-        string path = Path.Combine(Datasets.CacheDirectory, $"sweep-{name}.lookup");
+        // "-e2": records carry the detail and colour thumbnails too (older caches do not).
+        string path = Path.Combine(Datasets.CacheDirectory, $"sweep-{name}-e2.lookup");
         if (!File.Exists(path))
         {
             Build(path, sources, sources.Length * copiesPerSource, seed: 11);
@@ -200,8 +203,15 @@ internal static class SweepBench
                 Height = square ? 1000 : 360,
                 Format = "JPEG",
                 DHash = (ulong)random.NextInt64(),
-                Thumbnail = SmoothThumbnail(random),
                 UpdatedUtc = DateTime.UnixEpoch,
+            };
+            var grid = RandomGrid(random);
+            var colour = (RandomGrid(random), RandomGrid(random));
+            records[i] = records[i] with
+            {
+                Thumbnail = Smooth(grid, GreyThumbnail.Side),
+                Detail = Smooth(grid, DetailThumbnail.Side),
+                Chroma = [.. Smooth(colour.Item1, ChromaThumbnail.Side, 0.1), .. Smooth(colour.Item2, ChromaThumbnail.Side, 0.1)],
             };
         }
 
@@ -218,6 +228,8 @@ internal static class SweepBench
                 Width = original.Width,
                 Height = original.Height,
                 Thumbnail = byteCopy ? original.Thumbnail : [.. original.Thumbnail!.Select(b => (byte)Math.Min(255, (b * 11 / 10) + 3))],
+                Detail = byteCopy ? original.Detail : [.. original.Detail!.Select(b => (byte)Math.Min(255, (b * 11 / 10) + 3))],
+                Chroma = original.Chroma,
             };
         }
 
@@ -267,30 +279,39 @@ internal static class SweepBench
         return w;
     }
 
-    /// <summary>A smooth random 32 × 32 grey picture: a 5 × 5 random grid, bilinearly enlarged.</summary>
-    private static byte[] SmoothThumbnail(Random random)
+    /// <summary>A 5 × 5 grid of random levels (0–255).</summary>
+    private static double[] RandomGrid(Random random)
     {
-        const int Grid = 5;
         var coarse = new double[Grid * Grid];
         for (int k = 0; k < coarse.Length; k++)
         {
             coarse[k] = random.Next(256);
         }
 
-        var pixels = new byte[GreyThumbnail.Length];
-        for (int y = 0; y < GreyThumbnail.Side; y++)
+        return coarse;
+    }
+
+    /// <summary>
+    /// A smooth picture of <paramref name="side"/>² bytes: <paramref name="coarse"/> bilinearly enlarged (the same grid
+    /// gives the 32 × 32 thumbnail and the 64 × 64 detail of one photo), scaled by <paramref name="contrast"/> about 128
+    /// (chroma planes vary far less than grey).
+    /// </summary>
+    private static byte[] Smooth(double[] coarse, int side, double contrast = 1)
+    {
+        var pixels = new byte[side * side];
+        for (int y = 0; y < side; y++)
         {
-            double gy = y * (Grid - 1) / (double)(GreyThumbnail.Side - 1);
+            double gy = y * (Grid - 1) / (double)(side - 1);
             int y0 = Math.Min((int)gy, Grid - 2);
             double fy = gy - y0;
-            for (int x = 0; x < GreyThumbnail.Side; x++)
+            for (int x = 0; x < side; x++)
             {
-                double gx = x * (Grid - 1) / (double)(GreyThumbnail.Side - 1);
+                double gx = x * (Grid - 1) / (double)(side - 1);
                 int x0 = Math.Min((int)gx, Grid - 2);
                 double fx = gx - x0;
                 double top = (coarse[(y0 * Grid) + x0] * (1 - fx)) + (coarse[(y0 * Grid) + x0 + 1] * fx);
                 double bottom = (coarse[((y0 + 1) * Grid) + x0] * (1 - fx)) + (coarse[((y0 + 1) * Grid) + x0 + 1] * fx);
-                pixels[(y * GreyThumbnail.Side) + x] = (byte)Math.Round((top * (1 - fy)) + (bottom * fy));
+                pixels[(y * side) + x] = (byte)Math.Round(128 + (contrast * ((top * (1 - fy)) + (bottom * fy) - 128)));
             }
         }
 

@@ -95,7 +95,7 @@ public sealed class CalibrationInput
             indexed++;
             if (!string.IsNullOrEmpty(record.Sku) && record.NodeId is int node && node >= 0 && node < graph.Count && !graph.IsDeleted(node))
             {
-                photos.Add(record with { Thumbnail = null });
+                photos.Add(record with { Thumbnail = null, Detail = null, Chroma = null });
             }
         }
 

@@ -45,7 +45,17 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
         var photos = new PhotoTable(index);
         var graphStore = new GraphStore(index);
         var graph = OpenGraph(graphStore, options);
-        var known = photos.All().Select(ToKnown).ToList();
+        var known = new List<KnownPhoto>();
+        var withoutEvidence = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var record in photos.All())
+        {
+            known.Add(ToKnown(record));
+            if (record.Status == PhotoStatus.Indexed && (record.Detail is null || record.Chroma is null))
+            {
+                withoutEvidence.Add(record.Path);
+            }
+        }
+
         var plan = new ChangePlanner().Plan(
             known, inShard, scan.Unreadable, new ChangePlanOptions { KeepMissing = options.KeepMissing }, cancellationToken);
 
@@ -56,7 +66,7 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
             new CatalogueSettings(root, mapping.Spec, embedder.Card.ToJson(), embedder.Fingerprint, Now()).Write(index);
             foreach (var item in plan.Items)
             {
-                ApplyCheapChange(item, photos, graph, jobs, summary, options);
+                ApplyCheapChange(item, photos, graph, jobs, summary, options, withoutEvidence);
             }
 
             foreach (var problem in scan.Problems.Where(p => IsUnreadablePhoto(p, options)))
@@ -141,11 +151,24 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
         return graphStore.Load(embedder.Fingerprint);
     }
 
-    private void ApplyCheapChange(PlannedChange item, PhotoTable photos, HnswGraph graph, List<PhotoJob> jobs, Tally tally, IngestOptions options)
+    private void ApplyCheapChange(
+        PlannedChange item, PhotoTable photos, HnswGraph graph, List<PhotoJob> jobs, Tally tally, IngestOptions options,
+        HashSet<string> withoutEvidence)
     {
         var known = item.Known;
         switch (item.Kind)
         {
+            // Indexed before ingest stored the detail and colour thumbnails: decode once more, keep the embedding.
+            case ChangeKind.Unchanged or ChangeKind.Touched or ChangeKind.SkuChanged
+                when item.Current is not null && known?.Status == KnownPhotoStatus.Indexed && withoutEvidence.Contains(item.RelativePath):
+                if (item.Kind != ChangeKind.Unchanged)
+                {
+                    ApplyCheapChange(item, photos, graph, jobs, tally, options, []);
+                }
+
+                jobs.Add(new PhotoJob(WithPlannedSku(item), null, null, EvidenceOnly: true));
+                tally.Updated += item.Kind == ChangeKind.Unchanged ? 1 : 0;
+                break;
             case ChangeKind.Unchanged when options.RetryFailed && known?.Status == KnownPhotoStatus.Failed && item.Current is not null:
                 jobs.Add(new PhotoJob(WithPlannedSku(item), null, null));
                 tally.Changed++;
@@ -242,6 +265,19 @@ internal sealed class CatalogueIngest(IndexFile index, ImageEmbedder embedder, T
 
     private void Store(PhotoOutcome outcome, PhotoTable photos, HnswGraph graph, List<IngestFailure> failures)
     {
+        if (outcome.Job.EvidenceOnly)
+        {
+            // Only the new evidence is taken; a photo that no longer decodes keeps its record (the sweep then judges
+            // its pairs on the 32 × 32 thumbnail, as before), and the next run tries again.
+            var known = photos.Find(outcome.Record.Path);
+            if (known is not null && outcome.Record.Status == PhotoStatus.Indexed && outcome.Record.Sha256 == known.Sha256)
+            {
+                photos.Upsert(known with { Detail = outcome.Record.Detail, Chroma = outcome.Record.Chroma });
+            }
+
+            return;
+        }
+
         Retire(outcome.Job.ReplacesNode, graph);
         var record = outcome.Record;
         if (outcome.Embedding is not null)

@@ -31,9 +31,11 @@ internal static class MergeRules
 
     /// <summary>Equal in every field except the node id (which is numbered per index file).</summary>
     public static bool SameRecord(PhotoRecord a, PhotoRecord b) =>
-        a with { NodeId = null, Thumbnail = null } == b with { NodeId = null, Thumbnail = null }
+        a with { NodeId = null, Thumbnail = null, Detail = null, Chroma = null } == b with { NodeId = null, Thumbnail = null, Detail = null, Chroma = null }
         && (a.NodeId is null) == (b.NodeId is null)
-        && (a.Thumbnail ?? []).AsSpan().SequenceEqual(b.Thumbnail ?? []);
+        && (a.Thumbnail ?? []).AsSpan().SequenceEqual(b.Thumbnail ?? [])
+        && (a.Detail is null) == (b.Detail is null) && (a.Detail ?? []).AsSpan().SequenceEqual(b.Detail ?? [])
+        && (a.Chroma is null) == (b.Chroma is null) && (a.Chroma ?? []).AsSpan().SequenceEqual(b.Chroma ?? []);
 
     /// <summary>What to do with the winning record of a path, given what the target holds.</summary>
     public static MergeStepKind Decide(PhotoRecord winner, PhotoRecord? known)

@@ -53,17 +53,27 @@ internal sealed class PhotoWorker(PhotoDecoder decoder, ImageEmbedder embedder, 
             string sha = job.Sha256 ?? Convert.ToHexStringLower(SHA256.HashData(bytes));
             record = record with { Sha256 = sha, Size = bytes.Length };
             using var photo = decoder.Decode(bytes, entry.FullPath);
-            var embedding = new float[embedder.Dimension];
-            embedder.Embed(photo.Image, embedding);
-            return new PhotoOutcome(job, record with
+            var pixels = PhotoThumbnail.EvidenceOf(photo.Image);
+            record = record with
             {
                 Status = PhotoStatus.Indexed,
                 Width = photo.Image.Width,
                 Height = photo.Image.Height,
                 Format = photo.Info.Format.ToString(),
                 DHash = DifferenceHash.Compute(photo.Image),
-                Thumbnail = Thumbnail(photo.Image),
-            }, embedding);
+                Thumbnail = pixels.Thumbnail,
+                Detail = pixels.Detail,
+                Chroma = pixels.Chroma,
+            };
+            if (job.EvidenceOnly)
+            {
+                // An unchanged photo indexed before the finer pixel evidence was stored: no embedding is needed.
+                return new PhotoOutcome(job, record, null);
+            }
+
+            var embedding = new float[embedder.Dimension];
+            embedder.Embed(photo.Image, embedding);
+            return new PhotoOutcome(job, record, embedding);
         }
         catch (PhotoRejectedException e)
         {

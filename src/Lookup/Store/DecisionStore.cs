@@ -49,6 +49,22 @@ public sealed class DecisionStore
         return null;
     }
 
+    /// <summary>Deletes the decision on <paramref name="key"/> (joins the caller's transaction); false when there was none.</summary>
+    public bool Remove(string key)
+    {
+        ArgumentException.ThrowIfNullOrEmpty(key);
+        _file.RequireWritable();
+        return _file.Database.CollectionExists(CollectionName) && Decisions.Delete(key);
+    }
+
+    /// <summary>Deletes the pair decisions recorded with the finding decision <paramref name="findingKey"/>; returns how many.</summary>
+    public int RemoveRecordedWith(string findingKey)
+    {
+        ArgumentException.ThrowIfNullOrEmpty(findingKey);
+        _file.RequireWritable();
+        return _file.Database.CollectionExists(CollectionName) ? Decisions.DeleteMany(Query.EQ("via", findingKey)) : 0;
+    }
+
     private static BsonDocument ToBson(ReviewerDecision d) => new()
     {
         ["_id"] = d.Key,

@@ -42,6 +42,14 @@ public sealed record PhotoRecord
     /// <summary>32 × 32 grey thumbnail (1,024 bytes) for the sweep's pixel evidence; null when not made.</summary>
     public byte[]? Thumbnail { get; init; }
 
+    /// <summary>64 × 64 grey detail thumbnail (4,096 bytes) for the sweep's copy check; null in records written before
+    /// it was stored (the next ingest adds it).</summary>
+    public byte[]? Detail { get; init; }
+
+    /// <summary>32 × 32 Cb and Cr planes (2,048 bytes) for the sweep's colour check; null in records written before it
+    /// was stored (the next ingest adds it).</summary>
+    public byte[]? Chroma { get; init; }
+
     /// <summary>Short machine-readable reason for a failure (e.g. TooManyPixels).</summary>
     public string? FailureReason { get; init; }
 

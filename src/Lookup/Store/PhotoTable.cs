@@ -85,6 +85,16 @@ public sealed class PhotoTable
             doc["thumb"] = r.Thumbnail;
         }
 
+        if (r.Detail is not null)
+        {
+            doc["detail"] = r.Detail;
+        }
+
+        if (r.Chroma is not null)
+        {
+            doc["chroma"] = r.Chroma;
+        }
+
         if (r.FailureReason is not null)
         {
             doc["why"] = r.FailureReason;
@@ -108,6 +118,8 @@ public sealed class PhotoTable
         Format = doc["fmt"].IsNull ? null : doc["fmt"].AsString,
         DHash = unchecked((ulong)doc["dhash"].AsInt64),
         Thumbnail = doc.TryGetValue("thumb", out var thumb) ? thumb.AsBinary : null,
+        Detail = doc.TryGetValue("detail", out var detail) ? detail.AsBinary : null,
+        Chroma = doc.TryGetValue("chroma", out var chroma) ? chroma.AsBinary : null,
         FailureReason = doc.TryGetValue("why", out var why) ? why.AsString : null,
         FailureMessage = doc.TryGetValue("msg", out var msg) ? msg.AsString : null,
         UpdatedUtc = doc["updated"].AsDateTime.ToUniversalTime(),

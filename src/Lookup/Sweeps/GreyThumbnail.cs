@@ -40,43 +40,6 @@ public sealed class GreyThumbnail
     /// <param name="grey">Grey levels row by row, <paramref name="width"/> × <paramref name="height"/> bytes.</param>
     /// <param name="width">Image width in pixels.</param>
     /// <param name="height">Image height in pixels.</param>
-    public static GreyThumbnail FromGrey(ReadOnlySpan<byte> grey, int width, int height)
-    {
-        ArgumentOutOfRangeException.ThrowIfNegativeOrZero(width);
-        ArgumentOutOfRangeException.ThrowIfNegativeOrZero(height);
-        if (grey.Length != (long)width * height)
-        {
-            throw new ArgumentException(
-                $"A {width} × {height} grey image has {(long)width * height} bytes, {grey.Length} were given.", nameof(grey));
-        }
-
-        var columns = AreaWeights.For(width, Side);
-        var rows = AreaWeights.For(height, Side);
-
-        // Horizontal pass into height × 32 floats, then vertical pass into 32 × 32.
-        var narrow = new float[height * Side];
-        for (var y = 0; y < height; y++)
-        {
-            columns.Apply(grey.Slice(y * width, width), narrow.AsSpan(y * Side, Side));
-        }
-
-        var pixels = new byte[Length];
-        var columnBuffer = new float[height];
-        Span<float> shrunk = stackalloc float[Side];
-        for (var x = 0; x < Side; x++)
-        {
-            for (var y = 0; y < height; y++)
-            {
-                columnBuffer[y] = narrow[(y * Side) + x];
-            }
-
-            rows.Apply(columnBuffer, shrunk);
-            for (var y = 0; y < Side; y++)
-            {
-                pixels[(y * Side) + x] = (byte)Math.Clamp(MathF.Round(shrunk[y]), 0f, 255f);
-            }
-        }
-
-        return new GreyThumbnail(pixels);
-    }
+    public static GreyThumbnail FromGrey(ReadOnlySpan<byte> grey, int width, int height) =>
+        new(AreaShrink.ToSquare(grey, width, height, Side));
 }

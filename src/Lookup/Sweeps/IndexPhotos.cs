@@ -5,7 +5,7 @@ namespace Lookup.Sweeps;
 
 /// <summary>
 /// The sweep's photos from an index: every indexed photo record with a SKU and a live graph node, its embedding read
-/// in place from the loaded graph (no copy) and its stored 32 × 32 thumbnail. A photo's sweep id is its node id.
+/// in place from the loaded graph (no copy) and its stored thumbnails (32 × 32 grey, 64 × 64 detail, 32 × 32 colour). A photo's sweep id is its node id.
 /// </summary>
 internal static class IndexPhotos
 {
@@ -37,9 +37,11 @@ internal static class IndexPhotos
             }
 
             var thumbnail = record.Thumbnail is { Length: GreyThumbnail.Length } bytes ? new GreyThumbnail(bytes) : null;
+            var detail = record.Detail is { Length: DetailThumbnail.Length } fine ? new DetailThumbnail(fine) : null;
+            var chroma = record.Chroma is { Length: ChromaThumbnail.Length } colour ? new ChromaThumbnail(colour) : null;
             photos.Add(new SweepPhoto(
                 node, record.Sku, record.Path, record.Sha256, record.DHash, record.Width, record.Height, record.Size,
-                new ReadOnlyMemory<float>(vectors, node * graph.Dimension, graph.Dimension), thumbnail));
+                new ReadOnlyMemory<float>(vectors, node * graph.Dimension, graph.Dimension), thumbnail, detail, chroma));
         }
 
         return (photos, withoutSku, withoutNode);

@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using Lookup.Calibration;
 using Lookup.Graph;
 using Lookup.Imaging;
 using Lookup.Store;
@@ -65,7 +66,10 @@ public static partial class IndexSweep
 
         return new IndexSweepResult(
             reported, newKeys, snapshot.Previous, number, notStored, snapshot.CatalogueRoot, snapshot.WithoutSku,
-            snapshot.WithoutNode, readTime, sweepTime, watch.Elapsed - readTime - sweepTime);
+            snapshot.WithoutNode, readTime, sweepTime, watch.Elapsed - readTime - sweepTime)
+        {
+            Calibration = snapshot.Calibration,
+        };
     }
 
     /// <summary>
@@ -153,7 +157,8 @@ public static partial class IndexSweep
         IReadOnlySet<string> PreviousKeys,
         string? CatalogueRoot,
         int WithoutSku,
-        int WithoutNode)
+        int WithoutNode,
+        CalibrationRecord? Calibration)
     {
         public static Snapshot Read(string indexPath, IndexSweepOptions options)
         {
@@ -171,7 +176,8 @@ public static partial class IndexSweep
                 previous is null ? new HashSet<string>() : sweeps.KeysOf(previous.Number),
                 CatalogueSettings.Read(file)?.CatalogueRoot,
                 withoutSku,
-                withoutNode);
+                withoutNode,
+                ReferenceEquals(VerdictThresholds.ReadOrDefault(file), VerdictThresholds.Default) ? null : CalibrationRecord.Read(file));
         }
     }
 }

@@ -1,3 +1,4 @@
+using Lookup.Calibration;
 using Lookup.Store;
 
 namespace Lookup.Sweeps;
@@ -28,6 +29,10 @@ public sealed record IndexSweepResult(
     TimeSpan SweepTime,
     TimeSpan StoreTime)
 {
+    /// <summary>The index's last calibration (its histograms and bands, for the report), or null when it was never
+    /// calibrated and the sweep used its default bands.</summary>
+    public CalibrationRecord? Calibration { get; init; }
+
     /// <summary>True when the sweep is remembered in the index.</summary>
     public bool Stored => Number is not null;
 

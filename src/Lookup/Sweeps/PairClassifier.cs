@@ -12,6 +12,8 @@ internal sealed class PairClassifier
     private readonly SweepOptions _options;
     private readonly AlignmentLimits _limits;
     private readonly ThumbnailAligner _aligner = new();
+    private readonly DetailComparer _detail = new();
+    private readonly ChromaComparer _chroma = new();
 
     public PairClassifier(SweepOptions options)
     {
@@ -51,8 +53,13 @@ internal sealed class PairClassifier
         {
             if (thumbA is not null && thumbB is not null)
             {
-                var (best, passed) = BestAlignment(a, thumbA, b, thumbB, distance);
+                var (best, passed, searched) = BestAlignment(a, thumbA, b, thumbB, distance);
                 evidence = evidence with { Correlation = best.Correlation, Alignment = best.Hypothesis };
+                if (passed)
+                {
+                    (passed, evidence) = Confirm(a, b, best, searched, evidence);
+                }
+
                 if (passed)
                 {
                     var (container, content) = best.ContainerIsA ? (a, b) : (b, a);
@@ -67,6 +74,47 @@ internal sealed class PairClassifier
 
         var relation = distance <= _options.LookAlikeMaxDistance && !SameSku(a, b) ? PairRelation.LookAlike : PairRelation.None;
         return (relation, evidence);
+    }
+
+    /// <summary>
+    /// A placement that passed on the 32 × 32 thumbnails, checked on the finer evidence when both photos have it: the
+    /// 64 × 64 detail thumbnails' gradients (whole frames and searched placements each against their own bar), then
+    /// colour. Photos without the finer evidence (indexes from before it was stored) keep the 32 × 32 verdict.
+    /// </summary>
+    private (bool Passed, PairEvidence Evidence) Confirm(SweepPhoto a, SweepPhoto b, in AlignmentResult best, bool searched, PairEvidence evidence)
+    {
+        var (container, content) = best.ContainerIsA ? (a, b) : (b, a);
+        if (container.Detail is not null && content.Detail is not null)
+        {
+            var detail = _detail.Correlate(container.Detail, PhotoShape.Of(container), content.Detail, PhotoShape.Of(content), best.Hypothesis);
+            evidence = evidence with { DetailCorrelation = detail };
+            // A searched placement that is a whole frame up to the search's rounding claims no crop or turn, so it
+            // meets the whole-frame bar: two scale models of one part (M6 × 30 and M8 × 40 bolts) align that way.
+            var h = best.Hypothesis;
+            var wholeFrame = !searched || (SameAspect(a, b) && h.Scale >= 0.97f && Math.Abs(h.AngleDegrees) < 1f);
+            if (detail < (wholeFrame ? _options.WholeFrameMinDetailCorrelation : _options.AlignedMinDetailCorrelation))
+            {
+                return (false, evidence);
+            }
+        }
+
+        if (container.Chroma is not null && content.Chroma is not null)
+        {
+            var (contentSpread, containerSpread, correlation) =
+                _chroma.Compare(container.Chroma, PhotoShape.Of(container), content.Chroma, PhotoShape.Of(content), best.Hypothesis);
+            var (smaller, larger) = (Math.Min(contentSpread, containerSpread), Math.Max(contentSpread, containerSpread));
+            if (larger >= _options.ColourMinSpread)
+            {
+                evidence = evidence with { ColourSpread = larger, ColourSpreadRatio = smaller / larger, ColourCorrelation = correlation };
+                if (smaller < _options.ColourMinSpreadRatio * larger ||
+                    (smaller >= _options.ColourMinSpread && correlation < _options.ColourMinCorrelation))
+                {
+                    return (false, evidence);
+                }
+            }
+        }
+
+        return (true, evidence);
     }
 
     private static bool SameSku(SweepPhoto a, SweepPhoto b) => string.Equals(a.Sku, b.Sku, StringComparison.Ordinal);
@@ -92,7 +140,7 @@ internal sealed class PairClassifier
     /// search only if they fail and the pair is close enough for a crop. Returns the best alignment and whether it
     /// passed its bar.
     /// </summary>
-    private (AlignmentResult Best, bool Passed) BestAlignment(
+    private (AlignmentResult Best, bool Passed, bool Searched) BestAlignment(
         SweepPhoto a, GreyThumbnail thumbA, SweepPhoto b, GreyThumbnail thumbB, float distance)
     {
         var best = AlignmentResult.None;
@@ -103,19 +151,19 @@ internal sealed class PairClassifier
                 Math.Max(plain, mirrored), AlignmentHypothesis.FullFrame with { Mirrored = mirrored > plain }, true);
             if (best.Correlation >= _options.WholeFrameMinCorrelation)
             {
-                return (best, true);
+                return (best, true, false);
             }
         }
 
         if (distance > _options.CropMaxDistance)
         {
-            return (best, false);
+            return (best, false, false);
         }
 
         var searched = _aligner.Search(PhotoShape.Of(a), thumbA, PhotoShape.Of(b), thumbB, _limits);
         return searched.Correlation >= _options.AlignedMinCorrelation
-            ? (searched, true)
-            : (searched.Correlation > best.Correlation ? searched : best, false);
+            ? (searched, true, true)
+            : (searched.Correlation > best.Correlation ? searched : best, false, true);
     }
 
     private static bool SameSize(SweepPhoto a, SweepPhoto b) => a.Width == b.Width && a.Height == b.Height;

@@ -27,7 +27,7 @@ internal static class RegionSampler
         int resolution,
         in AlignmentHypothesis h)
     {
-        var map = Map(containerWidth, containerHeight, contentAspect, resolution, h);
+        var map = Map(containerWidth, containerHeight, contentAspect, resolution, h, Side);
         double sum = 0, sumSquares = 0, cross = 0;
         for (var j = 0; j < resolution; j++)
         {
@@ -37,7 +37,7 @@ internal static class RegionSampler
             float rowSum = 0, rowSquares = 0, rowCross = 0;
             for (var i = 0; i < resolution; i++)
             {
-                var s = Bilinear(container, tx, ty);
+                var s = Bilinear(container, tx, ty, Side);
                 rowSum += s;
                 rowSquares += s * s;
                 rowCross += s * row[i];
@@ -56,6 +56,15 @@ internal static class RegionSampler
     }
 
     /// <summary>Writes the container samples of hypothesis <paramref name="h"/> into <paramref name="samples"/>.</summary>
+    /// <param name="container">Container picture, <paramref name="side"/> × <paramref name="side"/> floats.</param>
+    /// <param name="containerWidth">Container photo width in pixels.</param>
+    /// <param name="containerHeight">Container photo height in pixels.</param>
+    /// <param name="contentAspect">Content photo width over height.</param>
+    /// <param name="resolution">Grid side.</param>
+    /// <param name="h">The hypothesis.</param>
+    /// <param name="samples">resolution² samples, row by row.</param>
+    /// <param name="side">Side of the container picture (32 for a <see cref="GreyThumbnail"/>, 64 for a
+    /// <see cref="DetailThumbnail"/>).</param>
     public static void Sample(
         ReadOnlySpan<float> container,
         int containerWidth,
@@ -63,33 +72,34 @@ internal static class RegionSampler
         double contentAspect,
         int resolution,
         in AlignmentHypothesis h,
-        Span<float> samples)
+        Span<float> samples,
+        int side = Side)
     {
-        var map = Map(containerWidth, containerHeight, contentAspect, resolution, h);
+        var map = Map(containerWidth, containerHeight, contentAspect, resolution, h, side);
         for (var j = 0; j < resolution; j++)
         {
             var tx = map.X0 + (map.Xj * j);
             var ty = map.Y0 + (map.Yj * j);
             for (var i = 0; i < resolution; i++)
             {
-                samples[(j * resolution) + i] = Bilinear(container, tx, ty);
+                samples[(j * resolution) + i] = Bilinear(container, tx, ty, side);
                 tx += map.Xi;
                 ty += map.Yi;
             }
         }
     }
 
-    private static float Bilinear(ReadOnlySpan<float> picture, float x, float y)
+    private static float Bilinear(ReadOnlySpan<float> picture, float x, float y, int side)
     {
-        x = Math.Clamp(x, 0f, Side - 1);
-        y = Math.Clamp(y, 0f, Side - 1);
-        var x0 = Math.Min((int)x, Side - 2);
-        var y0 = Math.Min((int)y, Side - 2);
+        x = Math.Clamp(x, 0f, side - 1);
+        y = Math.Clamp(y, 0f, side - 1);
+        var x0 = Math.Min((int)x, side - 2);
+        var y0 = Math.Min((int)y, side - 2);
         var fx = x - x0;
         var fy = y - y0;
-        var i = (y0 * Side) + x0;
+        var i = (y0 * side) + x0;
         var top = picture[i] + (fx * (picture[i + 1] - picture[i]));
-        var bottom = picture[i + Side] + (fx * (picture[i + Side + 1] - picture[i + Side]));
+        var bottom = picture[i + side] + (fx * (picture[i + side + 1] - picture[i + side]));
         return top + (fy * (bottom - top));
     }
 
@@ -98,7 +108,7 @@ internal static class RegionSampler
     /// (X0 + Xi·i + Xj·j, Y0 + Yi·i + Yj·j). Worked in container pixels so a turn stays a turn on a non-square photo.
     /// </summary>
     private static (float X0, float Xi, float Xj, float Y0, float Yi, float Yj) Map(
-        int width, int height, double contentAspect, int resolution, in AlignmentHypothesis h)
+        int width, int height, double contentAspect, int resolution, in AlignmentHypothesis h, int side)
     {
         var fitWidth = Math.Min(width, contentAspect * height);
         var regionWidth = h.Scale * fitWidth;
@@ -106,8 +116,8 @@ internal static class RegionSampler
         var angle = h.AngleDegrees * Math.PI / 180;
         var (sin, cos) = Math.SinCos(angle);
         var m = h.Mirrored ? -1.0 : 1.0;
-        var toX = (double)Side / width;
-        var toY = (double)Side / height;
+        var toX = (double)side / width;
+        var toY = (double)side / height;
 
         var stepX = m * regionWidth / resolution;
         var stepY = regionHeight / resolution;

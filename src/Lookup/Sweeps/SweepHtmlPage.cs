@@ -20,6 +20,11 @@ internal static class SweepHtmlPage
         .nopreview{display:flex;align-items:center;justify-content:center;color:#888}
         figcaption{font-size:12px;word-break:break-all}
         .role{color:#b00}.muted{color:#777}.caption{color:#444}
+        details.bands{margin:1em 0}details.bands summary{cursor:pointer;font-weight:600}
+        figure.calibration{width:auto;max-width:100%;margin:.6em 0}
+        figure.calibration img{width:100%;max-width:960px;height:auto;background:#fff}
+        figure.calibration figcaption{font-size:13px;word-break:normal;max-width:960px}
+        .uncalibrated{border-left:4px solid #c90;padding:.4em .8em;background:#fffbea}
         .new{font-size:.75em;background:#b00;color:#fff;border-radius:3px;padding:0 .4em;vertical-align:middle}
         """;
 

@@ -1,4 +1,5 @@
 using System.Globalization;
+using Lookup.Calibration;
 using Lookup.Reports;
 
 namespace Lookup.Sweeps;
@@ -19,6 +20,8 @@ public static class SweepHtmlWriter
     /// <param name="maxPairsPerFinding">Pairs listed per finding; the rest are counted.</param>
     /// <param name="caption">A line under the title (e.g. which index and catalogue root); escaped.</param>
     /// <param name="newKeys">Keys of findings to mark as new since the previous sweep; null marks none.</param>
+    /// <param name="calibration">The index's calibration: its plot is embedded (a data: PNG) with its bands, date
+    /// and sample size. Null: the page says the bands are defaults and how to calibrate.</param>
     public static void Write(
         SweepReport report,
         TextWriter writer,
@@ -26,7 +29,8 @@ public static class SweepHtmlWriter
         int maxFindings = 2000,
         int maxPairsPerFinding = 50,
         string? caption = null,
-        IReadOnlySet<string>? newKeys = null)
+        IReadOnlySet<string>? newKeys = null,
+        CalibrationRecord? calibration = null)
     {
         ArgumentNullException.ThrowIfNull(report);
         ArgumentNullException.ThrowIfNull(writer);
@@ -44,6 +48,7 @@ public static class SweepHtmlWriter
 
         writer.Write($"<p class=\"notice\">{E(report.Notice)}</p>\n");
         WriteSummary(report, writer);
+        WriteBands(report, writer, calibration);
         for (var f = 0; f < Math.Min(report.Findings.Count, maxFindings); f++)
         {
             WriteFinding(report.Findings[f], f + 1, writer, previews, images, maxPairsPerFinding, newKeys);
@@ -79,6 +84,39 @@ public static class SweepHtmlWriter
         }
 
         writer.Write("</p>\n");
+    }
+
+    /// <summary>
+    /// Where the distance bands come from: the calibration plot with a caption, or a note that they are defaults.
+    /// </summary>
+    private static void WriteBands(SweepReport report, TextWriter writer, CalibrationRecord? calibration)
+    {
+        var settings = report.Settings;
+        writer.Write("<details class=\"bands\" open><summary>Verdict bands</summary>");
+        if (calibration is null)
+        {
+            writer.Write($"<p class=\"uncalibrated\">This index has not been calibrated: the sweep used its default bands " +
+                $"(copy evidence looked for up to distance {N(settings.CopyMaxDistance, "0.00")}, look-alikes up to " +
+                $"{N(settings.LookAlikeMaxDistance, "0.00")}), measured on reference photos, not on this catalogue. Run " +
+                "<code>lookup calibrate --index FILE</code> to measure them on this catalogue; the next report then shows " +
+                "the distance histograms here.</p>");
+        }
+        else
+        {
+            var png = CalibrationPlot.RenderPng(calibration);
+            var at = calibration.CalibratedUtc.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture);
+            var strangers = calibration.StrangersInCopyBand;
+            writer.Write($"<figure class=\"calibration\"><img alt=\"Distance histograms of copies, siblings and strangers " +
+                $"with the verdict bands marked\" width=\"{CalibrationPlot.DefaultWidth}\" height=\"{CalibrationPlot.DefaultHeight}\" " +
+                $"src=\"data:image/png;base64,{Convert.ToBase64String(png)}\">");
+            writer.Write($"<figcaption>Calibrated {E(at)} on {calibration.PhotosSampled} photos ({calibration.Copies} planted " +
+                $"copies; seed {calibration.Seed}): copy ≤ {N(calibration.Copy, "0.000")}, same part ≤ " +
+                $"{N(calibration.SamePart, "0.000")}; strangers inside the copy band {strangers.Inside} of {strangers.Total} " +
+                $"(target {N(calibration.TargetFalseMatchRate * 100, "0.###")} %). Green: copies, blue: other photos of " +
+                "the same SKU, red: photos of different SKUs; shaded: the copy band (green) and the same-part band (sand).</figcaption></figure>");
+        }
+
+        writer.Write("</details>\n");
     }
 
     private static void WriteFinding(

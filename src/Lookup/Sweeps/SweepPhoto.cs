@@ -15,6 +15,9 @@ namespace Lookup.Sweeps;
 /// <param name="Embedding">The L2-normalised embedding (e.g. a slice of one contiguous array).</param>
 /// <param name="Thumbnail">The 32 × 32 grey thumbnail stored at ingest, or null when the index has none (then
 /// the sweep asks its thumbnail delegate, and without one falls back to the dHash alone).</param>
+/// <param name="Detail">The 64 × 64 grey thumbnail stored at ingest, or null when the index has none yet (then a
+/// copy rests on the 32 × 32 thumbnail alone, as before ingest stored it).</param>
+/// <param name="Chroma">The 32 × 32 colour-difference planes stored at ingest, or null when the index has none yet.</param>
 public sealed record SweepPhoto(
     int Id,
     string Sku,
@@ -25,7 +28,9 @@ public sealed record SweepPhoto(
     int Height,
     long FileSize,
     ReadOnlyMemory<float> Embedding,
-    GreyThumbnail? Thumbnail = null)
+    GreyThumbnail? Thumbnail = null,
+    DetailThumbnail? Detail = null,
+    ChromaThumbnail? Chroma = null)
 {
     /// <summary>Width over height; 1 when a dimension is unknown (zero).</summary>
     public double AspectRatio => Width > 0 && Height > 0 ? (double)Width / Height : 1.0;

@@ -47,6 +47,34 @@ public sealed class CatalogueIngestChangeTests(EmbedderFixture fixture) : IDispo
     }
 
     [Fact]
+    public void Records_from_before_the_detail_and_colour_thumbnails_get_them_on_the_next_run_without_embedding_again()
+    {
+        Fill();
+        EngineIngest.Run(tree, fixture.Embedder);
+        var fresh = IndexSnapshot.Read(tree.IndexPath);
+        using (var file = IndexFile.Open(tree.IndexPath, IndexAccess.Write))
+        {
+            var table = new PhotoTable(file);
+            file.InTransaction(() =>
+            {
+                foreach (var record in table.All().ToList())
+                {
+                    table.Upsert(record with { Detail = null, Chroma = null });
+                }
+            });
+        }
+
+        var summary = EngineIngest.Run(tree, fixture.Embedder);
+        var after = IndexSnapshot.Read(tree.IndexPath);
+
+        Assert.Equal((0, 0, 4, 0, 0), (summary.New, summary.Embedded, summary.Updated, summary.Changed, summary.Failures.Count));
+        Assert.Equal(fresh.Digest(), after.Digest());
+        Assert.All(after.Indexed, r => Assert.Equal((4096, 2048), (r.Detail!.Length, r.Chroma!.Length)));
+        var third = EngineIngest.Run(tree, fixture.Embedder);
+        Assert.Equal((0, 0, 4), (third.Updated, third.Embedded, third.Unchanged));
+    }
+
+    [Fact]
     public void A_changed_photo_is_embedded_again_and_its_old_node_is_never_returned()
     {
         Fill();

@@ -65,7 +65,9 @@ internal sealed class IndexSnapshot
         {
             text.Append(CultureInfo.InvariantCulture,
                 $"{r.Path}|{r.Sku}|{r.Size}|{r.MtimeUtcTicks}|{r.Sha256}|{r.Status}|{r.NodeId}|{r.Width}x{r.Height}|{r.Format}|{r.DHash}|{r.UpdatedUtc.Ticks}|{r.FailureReason}|{r.FailureMessage}|")
-                .Append(r.Thumbnail is null ? "-" : Convert.ToHexString(SHA256.HashData(r.Thumbnail))).Append('\n');
+                .Append(r.Thumbnail is null ? "-" : Convert.ToHexString(SHA256.HashData(r.Thumbnail))).Append('|')
+                .Append(r.Detail is null ? "-" : Convert.ToHexString(SHA256.HashData(r.Detail))).Append('|')
+                .Append(r.Chroma is null ? "-" : Convert.ToHexString(SHA256.HashData(r.Chroma))).Append('\n');
         }
 
         if (Graph is not null)

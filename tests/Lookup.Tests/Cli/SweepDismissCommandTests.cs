@@ -125,6 +125,52 @@ public sealed class SweepDismissCommandTests(IngestedCatalogue catalogue)
         Assert.Contains("give a finding key, --pair PATH PATH, or --from FILE", error, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void List_shows_each_decision_once_and_undo_brings_a_dismissed_finding_back()
+    {
+        using var workspace = catalogue.CopyWorkspace();
+        var before = SweepOf(workspace);
+        var copies = before.Findings.First(f => f.Kind == "copiesInOneSku");
+        Assert.Equal(0, RunCommand("dismiss", "--index", workspace.Index, copies.Key[..12], "--reviewer", "ana", "--note", "kit photos").ExitCode);
+        Assert.Equal(0, RunCommand("dismiss", "--index", workspace.Index, "--pair", catalogue.Graf3Path, catalogue.HostilePath, "--reviewer", "ben").ExitCode);
+        var pairKeys = copies.Pairs.Select(p => p.Key).Distinct().Count();
+
+        var (listExit, list, listError) = RunCommand("dismiss", "--index", workspace.Index, "--list");
+
+        Assert.True(listExit == 0, listError);
+        var rows = list.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        Assert.StartsWith("key ", rows[0], StringComparison.Ordinal);
+        Assert.Single(rows, r => r.StartsWith(copies.Key[..12], StringComparison.Ordinal) && r.Contains($"finding ({pairKeys} pairs)", StringComparison.Ordinal)
+            && r.Contains("ana", StringComparison.Ordinal) && r.EndsWith("kit photos", StringComparison.Ordinal));
+        Assert.Single(rows, r => r.Contains("  pair  ", StringComparison.Ordinal) && r.Contains("ben", StringComparison.Ordinal));
+        Assert.Contains("2 decisions.", list, StringComparison.Ordinal);
+        Assert.DoesNotContain(SweepOf(workspace).Findings, f => f.Key == copies.Key);
+
+        var (undoExit, undo, undoError) = RunCommand("dismiss", "--index", workspace.Index, "--undo", copies.Key[..10]);
+
+        Assert.True(undoExit == 0, undoError + undo);
+        Assert.Contains($"Took back ana's decision on finding {copies.Key} and the {pairKeys} pair decision(s) recorded with it", undo, StringComparison.Ordinal);
+        Assert.Contains(SweepOf(workspace).Findings, f => f.Key == copies.Key);
+        using (var index = IndexFile.Open(workspace.Index, IndexAccess.Read))
+        {
+            var left = Assert.Single(new DecisionStore(index).All());
+            Assert.Equal(("ben", DecisionTarget.Pair), (left.Reviewer, left.Target));
+        }
+
+        var (againExit, again, _) = RunCommand("dismiss", "--index", workspace.Index, "--undo", copies.Key[..10]);
+        Assert.Equal(1, againExit);
+        Assert.Contains("No decision has a key starting", again, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Undo_with_something_to_dismiss_as_well_is_a_usage_error()
+    {
+        var (exitCode, _, error) = RunCommand("dismiss", "--index", catalogue.Index, "--undo", "0123456789ab", "--pair", "a.jpg", "b.jpg");
+
+        Assert.Equal(2, exitCode);
+        Assert.Contains("--list and --undo each go alone", error, StringComparison.Ordinal);
+    }
+
     /// <summary>Sweeps and stores (so the findings can be dismissed by key), returning the JSON.</summary>
     private static SweepJson SweepOf(IngestedCatalogue.Workspace workspace)
     {

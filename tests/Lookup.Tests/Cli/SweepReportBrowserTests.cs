@@ -45,6 +45,10 @@ public sealed partial class SweepReportBrowserTests(IngestedCatalogue catalogue)
         Assert.Equal(findings.Sum(f => f.Members.Count), ImageTag().Matches(dom).Count);
         Assert.DoesNotContain("no preview", dom, StringComparison.Ordinal);
         Assert.Equal(2, Regex.Matches(dom, Regex.Escape(Lookup.Reports.HtmlText.Escape(Verdicts.SafetyNotice))).Count);
+
+        // The index was never calibrated: the page says its bands are defaults and how to calibrate.
+        Assert.Contains("This index has not been calibrated: the sweep used its default bands", dom, StringComparison.Ordinal);
+        Assert.Contains("<code>lookup calibrate --index FILE</code>", dom, StringComparison.Ordinal);
     }
 
     public void Dispose() => Directory.Delete(_folder, recursive: true);

@@ -68,7 +68,7 @@ internal static class SweepFixtures
         var bytes = fileBytes ?? EncodePng(image);
         return new SweepPhoto(
             id, sku, path, Convert.ToHexStringLower(SHA256.HashData(bytes)), DHash(image), image.Width, image.Height,
-            bytes.Length, embedding, Thumbnail(image));
+            bytes.Length, embedding, Thumbnail(image), Detail(image), Chroma(image));
     }
 
     public static byte[] EncodePng(Image<Rgb24> image)
@@ -84,6 +84,30 @@ internal static class SweepFixtures
         var bytes = new byte[image.Width * image.Height];
         grey.CopyPixelDataTo(bytes);
         return GreyThumbnail.FromGrey(bytes, image.Width, image.Height);
+    }
+
+    public static DetailThumbnail Detail(Image<Rgb24> image)
+    {
+        using var grey = image.CloneAs<L8>();
+        var bytes = new byte[image.Width * image.Height];
+        grey.CopyPixelDataTo(bytes);
+        return DetailThumbnail.FromGrey(bytes, image.Width, image.Height);
+    }
+
+    public static ChromaThumbnail Chroma(Image<Rgb24> image)
+    {
+        var (cb, cr) = (new byte[image.Width * image.Height], new byte[image.Width * image.Height]);
+        for (var y = 0; y < image.Height; y++)
+        {
+            for (var x = 0; x < image.Width; x++)
+            {
+                var p = image[x, y];
+                cb[(y * image.Width) + x] = ChromaThumbnail.CbOf(p.R, p.G, p.B);
+                cr[(y * image.Width) + x] = ChromaThumbnail.CrOf(p.R, p.G, p.B);
+            }
+        }
+
+        return ChromaThumbnail.FromPlanes(cb, cr, image.Width, image.Height);
     }
 
     /// <summary>The engine's dHash (Imaging), so tests see the bit layout the index will hold.</summary>

@@ -47,6 +47,8 @@ internal static class SyntheticIndex
         Format = "PNG",
         DHash = photo.DHash,
         Thumbnail = photo.Thumbnail?.Pixels.ToArray(),
+        Detail = photo.Detail?.Pixels.ToArray(),
+        Chroma = photo.Chroma?.Planes.ToArray(),
         UpdatedUtc = DateTime.UnixEpoch,
     };
 }
