@@ -14,7 +14,7 @@ internal static partial class DemoCommand
     [
         ("lookup ingest PHOTO-FOLDER --index parts.lookup", "index your catalogue (one sub-folder per SKU, or --sku-from csv:FILE)"),
         ("lookup calibrate --index parts.lookup", "measure the verdict distances on your own photos"),
-        ("lookup match SNAPSHOT.jpg --index parts.lookup", "which SKU a photo of a part shows"),
+        ("lookup match SNAPSHOT.jpg --index parts.lookup --crops dense", "which SKU a photo of a part shows (dense: small parts on a busy bench)"),
         ("lookup sweep --index parts.lookup --report sweep.html", "duplicates and misfiled photos in your catalogue"),
     ];
 
@@ -25,7 +25,7 @@ internal static partial class DemoCommand
         output.WriteLine(Invariant(
             $"1. Indexed {ingest.IndexedTotal} catalogue photos ({ingest.Embedded} embedded, {ingest.Unchanged} unchanged, {ingest.Failed} failed) in {result.IngestTime.TotalSeconds:0.0} s") +
             Invariant($"{(keptIndex is null ? " into a temporary index" : $" into {keptIndex}")}."));
-        output.WriteLine(Invariant($"2. Matched {result.Field.Count} bench snapshots in {result.MatchTime.TotalSeconds:0.0} s, each on its own as lookup match answers it:"));
+        output.WriteLine(Invariant($"2. Matched {result.Field.Count} bench snapshots in {result.MatchTime.TotalSeconds:0.0} s, each on its own as lookup match --crops dense answers it:"));
         var table = new TextTable("photo", "true SKU", "top SKU", "distance", "verdict", "right", "in top 3").AlignRight(3);
         foreach (var f in result.Field)
         {

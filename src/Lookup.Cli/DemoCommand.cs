@@ -3,6 +3,7 @@ using System.Text.Json;
 using Lookup.Cli.Output;
 using Lookup.Demo;
 using Lookup.Embedding;
+using Lookup.Matching;
 using Lookup.Store;
 using Lookup.Sweeps;
 
@@ -11,6 +12,12 @@ namespace Lookup.Cli;
 /// <summary><c>lookup demo</c>: the whole job on the invented demo catalogue, checked against its truth file.</summary>
 internal static partial class DemoCommand
 {
+    /// <summary>
+    /// The tour matches bench snapshots, where the part is small on a busy bench: it searches the dense crop set
+    /// (top-1 5/15 against 3/15 for the match default, DEVELOPERS.md section Matching) and says so.
+    /// </summary>
+    internal const CropSet TourCrops = CropSet.Dense;
+
     /// <summary>The report's file name when --report is not given (in the temporary folder).</summary>
     internal const string DefaultReportName = "lookup-demo-report.html";
 
@@ -100,7 +107,7 @@ internal static partial class DemoCommand
                 Directory.CreateDirectory(temporary);
             }
 
-            var options = new DemoTourOptions { DemoFolder = folder, IndexPath = indexPath, Crops = MatchCommand.DefaultCrops, Workers = request.Workers };
+            var options = new DemoTourOptions { DemoFolder = folder, IndexPath = indexPath, Crops = TourCrops, Workers = request.Workers };
             var result = new DemoTour(embedder).Run(options, progress, stop.Token);
             progress.Report($"writing {reportPath}");
             SweepCommand.WriteHtmlReport(reportPath, result.Sweep, Caption(result), request.Workers, stop.Token);
