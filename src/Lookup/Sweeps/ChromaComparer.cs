@@ -15,8 +15,7 @@ internal sealed class ChromaComparer
     private readonly float[] _content = new float[ChromaThumbnail.PlaneLength];
     private readonly float[] _samples = new float[ChromaThumbnail.Length];
     private readonly float[] _template = new float[ChromaThumbnail.Length];
-    private readonly float[] _narrow = new float[ChromaThumbnail.PlaneLength];
-    private readonly AreaWeights?[] _weights = new AreaWeights?[Side + 1];
+    private readonly SquareShrinker _shrinker = new(Side);
 
     /// <summary>
     /// The colour spread (root mean square of the mean-removed Cb and Cr, in levels) of the content and of the
@@ -34,7 +33,7 @@ internal sealed class ChromaComparer
             ThumbnailCorrelation.ToFloats(plane == 0 ? content.Cb : content.Cr, _content);
             RegionSampler.Sample(_container, containerShape.Width, containerShape.Height, contentShape.Aspect, resolution, h,
                 _samples.AsSpan(plane * n, n), Side);
-            Shrink(_content, _template.AsSpan(plane * n, n), resolution);
+            _shrinker.Shrink(_content, _template.AsSpan(plane * n, n), resolution);
             RemoveMean(_samples.AsSpan(plane * n, n));
             RemoveMean(_template.AsSpan(plane * n, n));
         }
@@ -63,36 +62,5 @@ internal sealed class ChromaComparer
         var fitHeight = fitWidth / content.Aspect;
         var span = Math.Min(scale * fitWidth / container.Width, scale * fitHeight / container.Height) * Side;
         return Math.Clamp((int)Math.Round(span), Side / 2, Side);
-    }
-
-    private void Shrink(ReadOnlySpan<float> pixels, Span<float> target, int resolution)
-    {
-        if (resolution == Side)
-        {
-            pixels.CopyTo(target);
-            return;
-        }
-
-        var weights = _weights[resolution] ??= AreaWeights.For(Side, resolution);
-        for (var y = 0; y < Side; y++)
-        {
-            weights.Apply(pixels.Slice(y * Side, Side), _narrow.AsSpan(y * resolution, resolution));
-        }
-
-        Span<float> column = stackalloc float[Side];
-        Span<float> shrunk = stackalloc float[Side];
-        for (var x = 0; x < resolution; x++)
-        {
-            for (var y = 0; y < Side; y++)
-            {
-                column[y] = _narrow[(y * resolution) + x];
-            }
-
-            weights.Apply(column, shrunk[..resolution]);
-            for (var y = 0; y < resolution; y++)
-            {
-                target[(y * resolution) + x] = shrunk[y];
-            }
-        }
     }
 }

@@ -18,10 +18,9 @@ internal sealed class DetailComparer
     private readonly float[] _content = new float[DetailThumbnail.Length];
     private readonly float[] _template = new float[DetailThumbnail.Length];
     private readonly float[] _samples = new float[DetailThumbnail.Length];
-    private readonly float[] _narrow = new float[DetailThumbnail.Length];
+    private readonly SquareShrinker _shrinker = new(Side);
     private readonly float[] _templateGradient = new float[2 * DetailThumbnail.Length];
     private readonly float[] _sampleGradient = new float[2 * DetailThumbnail.Length];
-    private readonly AreaWeights?[] _weights = new AreaWeights?[Side + 1];
 
     /// <summary>
     /// Gradient correlation of <paramref name="content"/> with the region of <paramref name="container"/> under
@@ -36,7 +35,7 @@ internal sealed class DetailComparer
         ThumbnailCorrelation.ToFloats(content.Pixels, _content);
         var resolution = Resolution(containerShape, contentShape, h.Scale);
         var length = 2 * resolution * (resolution - 1);
-        Shrink(_content, _template, resolution);
+        _shrinker.Shrink(_content, _template, resolution);
         Gradient(_template, resolution, _templateGradient);
         if (!ThumbnailCorrelation.Standardise(_templateGradient.AsSpan(0, length), _templateGradient.AsSpan(0, length)))
         {
@@ -96,38 +95,6 @@ internal sealed class DetailComparer
         var fitHeight = fitWidth / content.Aspect;
         var span = Math.Min(scale * fitWidth / container.Width, scale * fitHeight / container.Height) * Side;
         return Math.Clamp((int)Math.Round(span), MinResolution, Side);
-    }
-
-    /// <summary>Area-averages a 64 × 64 picture down to <paramref name="resolution"/>² (a copy at 64).</summary>
-    private void Shrink(ReadOnlySpan<float> pixels, Span<float> target, int resolution)
-    {
-        if (resolution == Side)
-        {
-            pixels.CopyTo(target);
-            return;
-        }
-
-        var weights = _weights[resolution] ??= AreaWeights.For(Side, resolution);
-        for (var y = 0; y < Side; y++)
-        {
-            weights.Apply(pixels.Slice(y * Side, Side), _narrow.AsSpan(y * resolution, resolution));
-        }
-
-        Span<float> column = stackalloc float[Side];
-        Span<float> shrunk = stackalloc float[Side];
-        for (var x = 0; x < resolution; x++)
-        {
-            for (var y = 0; y < Side; y++)
-            {
-                column[y] = _narrow[(y * resolution) + x];
-            }
-
-            weights.Apply(column, shrunk[..resolution]);
-            for (var y = 0; y < resolution; y++)
-            {
-                target[(y * resolution) + x] = shrunk[y];
-            }
-        }
     }
 
     /// <summary>Horizontal differences (side − 1 per row) then vertical differences (side − 1 per column).</summary>
