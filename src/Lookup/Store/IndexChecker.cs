@@ -351,15 +351,7 @@ public static partial class IndexChecker
 
             if (stored.Links.TryGetValue(id, out var layers) && layers.All(layer => layer.All(e => (uint)e < (uint)meta.Count)))
             {
-                int level = layers.Length - 1;
-                state.Levels[id] = (byte)level;
-                state.Upper[id] = level > 0 ? new int[level * state.StrideUpper] : null;
-                for (int lc = 0; lc <= level; lc++)
-                {
-                    var row = state.Row(id, lc);
-                    row[0] = layers[lc].Length;
-                    layers[lc].CopyTo(row[1..]);
-                }
+                NodeCodec.SetLinks(layers, state, id);
             }
         }
 

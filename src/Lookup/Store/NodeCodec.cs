@@ -63,9 +63,11 @@ internal static class NodeCodec
     }
 
     /// <summary>Fills the node's level and rows in <paramref name="state"/>.</summary>
-    public static void ReadLinks(BsonDocument doc, GraphState state, int id)
+    public static void ReadLinks(BsonDocument doc, GraphState state, int id) => SetLinks(ReadLinks(doc), state, id);
+
+    /// <summary>Sets node <paramref name="id"/>'s level and rows in <paramref name="state"/> from its links per layer.</summary>
+    public static void SetLinks(int[][] layers, GraphState state, int id)
     {
-        var layers = ReadLinks(doc);
         int level = layers.Length - 1;
         state.Levels[id] = (byte)level;
         state.Upper[id] = level > 0 ? new int[level * state.StrideUpper] : null;
